@@ -1,0 +1,28 @@
+"use server";
+// The chair's team actions: invite a judge, scribe or intake volunteer; remove a member.
+import { revalidatePath } from "next/cache";
+import { z } from "zod";
+import { inviteToTeam, removeFromTeam } from "@/db/queries/team";
+import { defineAction } from "@/lib/action";
+import { sendInvitationMail } from "@/lib/invitation-mail";
+import { inviteSchema, removeRoleSchema, ROLE_LABELS } from "@/lib/schemas/show";
+
+const showSlug = z.string().min(1, "The show is missing.");
+
+export const inviteAction = defineAction(inviteSchema.extend({ showSlug }), async (input, viewer) => {
+  const { token, show } = await inviteToTeam(viewer, input.showSlug, input);
+  revalidatePath(`/shows/${show.slug}/manage`);
+  try {
+    await sendInvitationMail({ email: input.email, role: input.role, showName: show.name, inviterName: viewer.name, token });
+  } catch (err) {
+    console.error("[team] invitation mail failed", err);
+    return { message: `The invitation is saved, but the e-mail to ${input.email} could not be sent. Try inviting again.` };
+  }
+  return { message: `Invitation sent to ${input.email} as ${ROLE_LABELS[input.role].toLowerCase()}.` };
+});
+
+export const removeMemberAction = defineAction(removeRoleSchema.extend({ showSlug }), async (input, viewer) => {
+  await removeFromTeam(viewer, input.showSlug, input.roleId);
+  revalidatePath(`/shows/${input.showSlug}/manage`);
+  return { message: "Removed from the team." };
+});

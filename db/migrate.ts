@@ -1,0 +1,14 @@
+// Applies the committed migrations in db/migrations to the database at `url`.
+import { drizzle } from "drizzle-orm/postgres-js";
+import { migrate } from "drizzle-orm/postgres-js/migrator";
+import path from "node:path";
+import postgres from "postgres";
+
+export async function migrateDatabase(url: string): Promise<void> {
+  const sql = postgres(url, { max: 1, onnotice: () => {} });
+  try {
+    await migrate(drizzle(sql), { migrationsFolder: path.join(process.cwd(), "db/migrations") });
+  } finally {
+    await sql.end();
+  }
+}

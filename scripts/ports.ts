@@ -1,0 +1,36 @@
+// Loopback ports and environments for the two ways Ribbonry runs here: `npm start` (dev) and
+// `npm test` (test). Both may run at once; they share the PostgreSQL server, not the database.
+export type Profile = "start" | "test";
+
+export const PG_PORT = Number(process.env.RIBBONRY_PG_PORT ?? 54329);
+
+const ports = {
+  start: { app: 3000, s3: 4569, smtp: 1025, mailWeb: 1080, payments: 12111 },
+  test: { app: 3100, s3: 4579, smtp: 1035, mailWeb: 1090, payments: 12121 },
+} as const;
+
+export function portsFor(profile: Profile) {
+  return ports[profile];
+}
+
+/** The environment the app, the fakes and the tests share for a profile (defaults only). */
+export function envFor(profile: Profile): Record<string, string> {
+  const p = ports[profile];
+  const database = profile === "test" ? "ribbonry_test" : "ribbonry";
+  const appUrl = profile === "test" ? `http://127.0.0.1:${p.app}` : `http://localhost:${p.app}`;
+  return {
+    APP_URL: appUrl,
+    PORT: String(p.app),
+    DATABASE_URL: `postgres://postgres@127.0.0.1:${PG_PORT}/${database}`,
+    S3_ENDPOINT: `http://127.0.0.1:${p.s3}`,
+    S3_BUCKET: "ribbonry-photos",
+    SMTP_HOST: "127.0.0.1",
+    SMTP_PORT: String(p.smtp),
+    MAIL_WEB_URL: `http://127.0.0.1:${p.mailWeb}`,
+    STRIPE_API_HOST: "127.0.0.1",
+    STRIPE_API_PORT: String(p.payments),
+    STRIPE_API_PROTOCOL: "http",
+    STRIPE_SECRET_KEY: "sk_test_ribbonry_local",
+    STRIPE_WEBHOOK_SECRET: "whsec_ribbonry_local",
+  };
+}

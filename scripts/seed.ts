@@ -1,0 +1,109 @@
+// `npm run db:seed`: puts the demo show, its people and 120 quilts (with generated photos) into
+// DATABASE_URL and the photo bucket, unless the demo show is already there. Safe to run again.
+// Reads process.env itself: db/client.ts and lib/env.ts import "server-only", which tsx cannot load.
+import { CreateBucketCommand, HeadBucketCommand, PutObjectCommand, S3Client } from "@aws-sdk/client-s3";
+import { drizzle } from "drizzle-orm/postgres-js";
+import postgres from "postgres";
+import * as schema from "../db/schema";
+import { DEMO_ACCOUNTS, DEMO_PASSWORD, DEMO_SHOW } from "../db/seed/demo-data";
+import { seedDemo } from "../db/seed/seed-demo";
+
+// The same names and defaults as lib/env.ts.
+const config = {
+  databaseUrl: process.env.DATABASE_URL || "postgres://postgres@127.0.0.1:54329/ribbonry",
+  s3: {
+    endpoint: process.env.S3_ENDPOINT || "http://127.0.0.1:4569",
+    region: process.env.S3_REGION || "us-east-1",
+    bucket: process.env.S3_BUCKET || "ribbonry-photos",
+    accessKeyId: process.env.S3_ACCESS_KEY_ID || "S3RVER",
+    secretAccessKey: process.env.S3_SECRET_ACCESS_KEY || "S3RVER",
+  },
+};
+
+const say = (msg: string) => console.log(`[ribbonry seed] ${msg}`);
+
+/** The URL without its password, for messages. */
+function redacted(url: string): string {
+  try {
+    const u = new URL(url);
+    if (u.password) u.password = "***";
+    return u.toString();
+  } catch {
+    return "(unparseable DATABASE_URL)";
+  }
+}
+
+function makeS3(): S3Client {
+  return new S3Client({
+    endpoint: config.s3.endpoint,
+    region: config.s3.region,
+    credentials: { accessKeyId: config.s3.accessKeyId, secretAccessKey: config.s3.secretAccessKey },
+    forcePathStyle: true,
+    // Local S3 fakes do not understand the newer default checksums.
+    requestChecksumCalculation: "WHEN_REQUIRED",
+    responseChecksumValidation: "WHEN_REQUIRED",
+  });
+}
+
+async function ensureBucket(s3: S3Client, bucket: string): Promise<void> {
+  try {
+    await s3.send(new HeadBucketCommand({ Bucket: bucket }));
+  } catch (err) {
+    const status = (err as { $metadata?: { httpStatusCode?: number } }).$metadata?.httpStatusCode;
+    if (status !== 404) throw new Error(`could not reach the photo store at ${config.s3.endpoint} (bucket "${bucket}"): ${describe(err)}`);
+    await s3.send(new CreateBucketCommand({ Bucket: bucket }));
+    say(`created bucket "${bucket}"`);
+  }
+}
+
+function describe(err: unknown): string {
+  if (err instanceof AggregateError && err.errors.length) return describe(err.errors[0]);
+  if (err instanceof Error) return (err as { code?: string }).code ? `${err.message || ""} (${(err as { code?: string }).code})`.trim() : err.message || err.name;
+  return String(err);
+}
+
+function printAccounts(): void {
+  const rows = DEMO_ACCOUNTS.map((a) => [a.role, a.name, a.email] as const);
+  const widths = [4, 4, 5].map((min, i) => Math.max(min, ...rows.map((r) => r[i]!.length)));
+  const line = (cells: readonly string[]) => cells.map((c, i) => c.padEnd(widths[i]!)).join("  ").trimEnd();
+  console.log(`\nDemo accounts (password for all: ${DEMO_PASSWORD})`);
+  console.log(line(["role", "name", "email"]));
+  console.log(line(widths.map((w) => "-".repeat(w))));
+  for (const r of rows) console.log(line(r));
+}
+
+async function main(): Promise<void> {
+  const sql = postgres(config.databaseUrl, { max: 4, onnotice: () => {} });
+  const s3 = makeS3();
+  try {
+    try {
+      await sql`select 1`;
+    } catch (err) {
+      throw new Error(`could not reach PostgreSQL at ${redacted(config.databaseUrl)}: ${describe(err)}`);
+    }
+    await ensureBucket(s3, config.s3.bucket);
+    const db = drizzle(sql, { schema, casing: "snake_case" });
+    const started = performance.now();
+    const { created } = await seedDemo({
+      db,
+      log: say,
+      putPhoto: async (key, body, contentType) => {
+        await s3.send(new PutObjectCommand({ Bucket: config.s3.bucket, Key: key, Body: body, ContentType: contentType }));
+      },
+    });
+    const seconds = ((performance.now() - started) / 1000).toFixed(1);
+    say(created ? `seeded "${DEMO_SHOW.name}" (/${DEMO_SHOW.slug}) in ${seconds} s` : `"${DEMO_SHOW.name}" was already seeded; nothing changed`);
+    printAccounts();
+  } finally {
+    s3.destroy();
+    await sql.end({ timeout: 5 });
+  }
+}
+
+main().catch((err) => {
+  console.error(`[ribbonry seed] failed: ${describe(err)}`);
+  // 42P01 = undefined_table: the database exists but has not been migrated.
+  if ((err as { code?: string }).code === "42P01") console.error("[ribbonry seed] run `npm run db:migrate` first.");
+  if (process.env.DEBUG) console.error(err);
+  process.exit(1);
+});
