@@ -34,9 +34,15 @@ export async function deleteObject(key: string): Promise<void> {
   await s3.send(new DeleteObjectCommand({ Bucket, Key: key }));
 }
 
-/** The uploader must send the same Content-Type header, or the signature does not match. */
+/**
+ * Content-Type is signed (the presigner leaves it out by default), so the uploader must send the
+ * same header: a URL minted for an image cannot be used to store, say, text/html under that key.
+ */
 export function presignPut(key: string, contentType: string, expiresSec: number): Promise<string> {
-  return getSignedUrl(s3, new PutObjectCommand({ Bucket, Key: key, ContentType: contentType }), { expiresIn: expiresSec });
+  return getSignedUrl(s3, new PutObjectCommand({ Bucket, Key: key, ContentType: contentType }), {
+    expiresIn: expiresSec,
+    signableHeaders: new Set(["content-type"]),
+  });
 }
 
 export function presignGet(key: string, expiresSec: number): Promise<string> {

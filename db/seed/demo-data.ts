@@ -277,7 +277,8 @@ function weighted<T>(rand: () => number, options: [T, number][]): T {
   return options[options.length - 1]![0];
 }
 
-function buildScenario(): DemoScenario {
+/** Builds the scenario from the fixed seed; the same every time. Most callers want demoScenario(). */
+export function buildDemoScenario(): DemoScenario {
   const rand = mulberry32(SCENARIO_SEED);
   const pick = <T>(xs: readonly T[]): T => xs[Math.floor(rand() * xs.length)]!;
   const between = (lo: number, hi: number) => lo + Math.floor(rand() * (hi - lo + 1));
@@ -488,7 +489,7 @@ let cached: DemoScenario | null = null;
 
 /** The whole scenario; built once per process and the same on every run. Treat it as read-only. */
 export function demoScenario(): DemoScenario {
-  cached ??= buildScenario();
+  cached ??= buildDemoScenario();
   return cached;
 }
 

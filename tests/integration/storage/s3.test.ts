@@ -64,12 +64,13 @@ describe("storage/s3", () => {
     expect(Buffer.compare(await getObjectBytes(key), bytes)).toBe(0);
   });
 
-  it("refuses a presigned PUT whose Content-Type differs from the signed one", async () => {
-    const key = `${prefix}/wrong-type.png`;
-    const putUrl = await presignPut(key, "image/png", 60);
-    const put = await fetch(putUrl, { method: "PUT", body: randomBytes(100), headers: { "content-type": "text/html" } });
-    expect(put.status).toBe(403);
-    await expect(getObjectBytes(key)).rejects.toSatisfy(isMissing);
+  it("signs Content-Type into the presigned PUT", async () => {
+    // s3rver 3.7.1 accepts any SigV4 signature ("Signature version 4 calculation is unimplemented"
+    // in its lib/middleware/authentication.js), so refusal can only be seen against real S3. What
+    // can be checked here is the URL's contract: per AWS SigV4 query-string signing, headers named
+    // in X-Amz-SignedHeaders must be sent unchanged or S3 answers 403 SignatureDoesNotMatch.
+    const url = new URL(await presignPut(`${prefix}/typed.png`, "image/png", 60));
+    expect(url.searchParams.get("X-Amz-SignedHeaders")?.split(";").sort()).toEqual(["content-type", "host"]);
   });
 
   it("fails with NoSuchKey for a missing key, and after deleteObject", async () => {
