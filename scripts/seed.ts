@@ -58,8 +58,22 @@ async function ensureBucket(s3: S3Client, bucket: string): Promise<void> {
 
 function describe(err: unknown): string {
   if (err instanceof AggregateError && err.errors.length) return describe(err.errors[0]);
-  if (err instanceof Error) return (err as { code?: string }).code ? `${err.message || ""} (${(err as { code?: string }).code})`.trim() : err.message || err.name;
+  // Drizzle wraps the driver's error ("Failed query: …"); the cause says what went wrong.
+  if (err instanceof Error && err.cause instanceof Error) return describe(err.cause);
+  if (err instanceof Error) {
+    const code = (err as { code?: string }).code;
+    return code ? `${err.message} (${code})` : err.message || err.name;
+  }
   return String(err);
+}
+
+/** The first error code down the cause chain (PostgreSQL's or Node's). */
+function codeOf(err: unknown): string | undefined {
+  for (let e: unknown = err; e instanceof Error; e = e.cause) {
+    const code = (e as { code?: string }).code;
+    if (code) return code;
+  }
+  return undefined;
 }
 
 function printAccounts(): void {
@@ -103,7 +117,7 @@ async function main(): Promise<void> {
 main().catch((err) => {
   console.error(`[ribbonry seed] failed: ${describe(err)}`);
   // 42P01 = undefined_table: the database exists but has not been migrated.
-  if ((err as { code?: string }).code === "42P01") console.error("[ribbonry seed] run `npm run db:migrate` first.");
+  if (codeOf(err) === "42P01") console.error("[ribbonry seed] run `npm run db:migrate` first.");
   if (process.env.DEBUG) console.error(err);
   process.exit(1);
 });

@@ -11,9 +11,9 @@ import { photoSizeFor, renderPatchwork, type PatchworkView } from "../../storage
 import { DEMO_PASSWORD, demoScenario, type DemoQuilt, type DemoShowRole } from "./demo-data";
 
 /**
- * The database handle the seeder needs. A PostgresJsDatabase<typeof schema> fits; so does a transaction of one,
- * which lets a test run the seeder inside a transaction it rolls back (the seeder's own
- * transaction then becomes a savepoint).
+ * The database handle the seeder needs. A PostgresJsDatabase<typeof schema> fits; so does one of
+ * its transactions, which lets a test run the seeder inside a transaction it rolls back (the
+ * seeder's own transaction then becomes a savepoint).
  */
 export type SeedDb = PgDatabase<PostgresJsQueryResultHKT, typeof schema>;
 
@@ -53,7 +53,7 @@ export async function seedDemo(opts: SeedDemoOptions): Promise<{ created: boolea
     return { created: false };
   }
 
-  // Build every row in memory first, so the transaction only writes.
+  // Build every row in memory first, so the transaction only writes rows and uploads photos.
   const passwordHash = await hashPassword(DEMO_PASSWORD); // one scrypt hash shared by every demo account
   const userIds = new Map(scenario.people.map((p) => [p.email, randomUUID()] as const));
   const idOf = (email: string) => userIds.get(email)!;
