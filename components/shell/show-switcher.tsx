@@ -42,8 +42,8 @@ export function ShowSwitcher({ nav }: { nav: ShellNav }) {
     };
   }, [open]);
 
-  const current = nav.myShows.find((s) => pathname.startsWith(`/shows/${s.slug}`))?.name
-    ?? nav.publicShows.find((s) => pathname.startsWith(`/shows/${s.slug}`))?.name;
+  const inShow = (slug: string) => pathname === `/shows/${slug}` || pathname.startsWith(`/shows/${slug}/`);
+  const current = (nav.myShows.find((s) => inShow(s.slug)) ?? nav.publicShows.find((s) => inShow(s.slug)))?.name;
 
   return (
     <div ref={wrapRef} className="relative">
@@ -55,7 +55,7 @@ export function ShowSwitcher({ nav }: { nav: ShellNav }) {
         onClick={() => setOpen((o) => !o)}
         className="inline-flex min-h-tap items-center gap-2 rounded-control border border-plum-600 px-3 font-semibold text-paper-100 hover:bg-plum-800"
       >
-        <span className="max-w-[14rem] truncate">{current ?? "Shows"}</span>
+        <span className="max-w-[8rem] truncate lg:max-w-[14rem]">{current ?? "Shows"}</span>
         <span className="sr-only"> — choose a show</span>
         <ChevronDown aria-hidden className={cx("size-5 transition-transform", open && "rotate-180")} />
       </button>

@@ -13,9 +13,11 @@ type Props = {
   /** "dark" for the plum header bar. */
   tone?: "light" | "dark";
   className?: string;
+  /** In the header bar at tablet width: icon only until the lg breakpoint (the name stays). */
+  compact?: boolean;
 };
 
-export function SignOutButton({ redirectTo = "/", label = "Sign out", tone = "light", className }: Props) {
+export function SignOutButton({ redirectTo = "/", label = "Sign out", tone = "light", className, compact }: Props) {
   const router = useRouter();
   const [pending, startTransition] = useTransition();
   const [failed, setFailed] = useState(false);
@@ -41,7 +43,7 @@ export function SignOutButton({ redirectTo = "/", label = "Sign out", tone = "li
     <span className="inline-flex flex-col">
       <button type="button" onClick={signOut} disabled={pending} aria-busy={pending || undefined} className={cx(classes, className)}>
         <LogOut aria-hidden className="size-5" />
-        <span>{pending ? "Signing out…" : label}</span>
+        <span className={compact ? "sr-only lg:not-sr-only" : undefined}>{pending ? "Signing out…" : label}</span>
       </button>
       {failed ? (
         <span role="alert" className={cx("mt-1 text-sm", tone === "dark" ? "text-gold-200" : "text-danger-700")}>

@@ -18,7 +18,8 @@ const barLink =
 
 export function SiteHeader({ nav }: { nav: ShellNav }) {
   const pathname = usePathname();
-  const links = nav.personal.filter((l) => l.icon !== "account");
+  // Signed out, the bar offers "Sign in" only; "Create an account" waits in the drawer and on pages.
+  const links = nav.user ? nav.personal.filter((l) => l.icon !== "account") : nav.personal.filter((l) => l.icon === "signIn");
   const account = nav.personal.find((l) => l.icon === "account");
   return (
     <header className="on-dark sticky top-0 z-30 bg-plum-900 text-paper-100 shadow-[0_1px_0_var(--color-plum-700)]">
@@ -50,13 +51,13 @@ export function SiteHeader({ nav }: { nav: ShellNav }) {
             <Link
               href={account.href}
               aria-current={isActive(pathname, account.href) ? "page" : undefined}
-              className={cx(barLink, "max-w-[12rem]")}
+              className={cx(barLink, "max-w-[10rem] lg:max-w-[14rem]")}
             >
               <UserRound aria-hidden className="size-5 shrink-0 text-gold-300" />
               <span className="sr-only">Account: </span>
               <span className="truncate">{nav.user.name}</span>
             </Link>
-            <SignOutButton tone="dark" />
+            <SignOutButton tone="dark" compact />
           </div>
         ) : null}
 

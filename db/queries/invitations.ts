@@ -80,6 +80,7 @@ export async function invitationByToken(token: string) {
       showId: shows.id,
       showSlug: shows.slug,
       showName: shows.name,
+      showTimeZone: shows.timeZone,
       invitedByName: user.name,
     })
     .from(showInvitations)

@@ -1,24 +1,20 @@
 // A show's public page: who runs it, where, the dates of each stage, and how to enter a quilt.
-import { cache } from "react";
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { MapPin, Users } from "lucide-react";
 import { formatDateRange } from "@/components/format/dates";
 import { EnterCallout } from "@/components/shows/enter-callout";
 import { ShowDateList } from "@/components/shows/show-dates";
+import { publicShowFor } from "@/components/shows/public-show";
 import { ShowStatusBadge } from "@/components/shows/show-status";
 import { currentViewer } from "@/components/shell/viewer";
 import { Card, CardHeader } from "@/components/ui/card";
 import { PageHeader } from "@/components/ui/page-header";
-import { publicShowBySlug } from "@/db/queries/shows";
 
 type Props = { params: Promise<{ slug: string }> };
 
-// generateMetadata and the page ask for the same show; look it up once per request.
-const showFor = cache(publicShowBySlug);
-
 export async function generateMetadata({ params }: Props): Promise<Metadata> {
-  const show = await showFor((await params).slug);
+  const show = await publicShowFor((await params).slug);
   if (!show) return { title: "Show not found" };
   const days = formatDateRange(show.showOpensAt, show.showClosesAt, show.timeZone);
   return {
@@ -29,7 +25,7 @@ export async function generateMetadata({ params }: Props): Promise<Metadata> {
 
 export default async function PublicShowPage({ params }: Props) {
   const { slug } = await params;
-  const [show, viewer] = await Promise.all([showFor(slug), currentViewer()]);
+  const [show, viewer] = await Promise.all([publicShowFor(slug), currentViewer()]);
   if (!show) notFound();
 
   return (

@@ -1,0 +1,37 @@
+// The intake desk: every entry sent to the show, searchable by number or name.
+import type { Metadata } from "next";
+import { Inbox } from "lucide-react";
+import { IntakeTable } from "@/components/desk/intake-table";
+import { guardQuery, pageViewer } from "@/components/shell/guard";
+import { Alert } from "@/components/ui/alert";
+import { EmptyState } from "@/components/ui/empty-state";
+import { PageHeader } from "@/components/ui/page-header";
+import { intakeList } from "@/db/queries/desk";
+
+type Props = { params: Promise<{ slug: string }> };
+
+export const metadata: Metadata = { title: "Intake desk" };
+
+export default async function DeskPage({ params }: Props) {
+  const { slug } = await params;
+  const viewer = await pageViewer();
+  const list = await guardQuery(intakeList(viewer, slug));
+  return (
+    <div className="space-y-6">
+      <PageHeader eyebrow={list.show.name} title="Intake desk" description="Find a quilt by its entry number or the entrant’s name." />
+      <Alert tone="info" title="Checking quilts in and out comes in a later update.">
+        For now this list shows each entry and where it stands.
+      </Alert>
+      <Alert tone="warning" title="Personal data">
+        Entrants’ names are here so you can match quilts to people at the desk. Don’t share or photograph this screen.
+      </Alert>
+      {list.entries.length ? (
+        <IntakeTable entries={list.entries} />
+      ) : (
+        <EmptyState icon={Inbox} title="No entries yet">
+          Entries appear here once quilters send them to the show.
+        </EmptyState>
+      )}
+    </div>
+  );
+}
