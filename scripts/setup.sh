@@ -85,8 +85,13 @@ pg_start() {
   fi
   if ! pg_run "$bindir/pg_ctl" -D "$data" status >/dev/null 2>&1; then
     log "starting PostgreSQL on 127.0.0.1:$PG_PORT"
-    pg_run "$bindir/pg_ctl" -D "$data" -l "$data/server.log" -w -t 60 \
-      -o "-h 127.0.0.1 -p $PG_PORT -k $sock" start >/dev/null
+    if ! pg_run "$bindir/pg_ctl" -D "$data" -l "$data/server.log" -w -t 60 \
+        -o "-h 127.0.0.1 -p $PG_PORT -k $sock" start >/dev/null; then
+      log "PostgreSQL did not start; the end of $data/server.log says:"
+      tail -n 5 "$data/server.log" >&2 || true
+      log "(another server on port $PG_PORT? set RIBBONRY_PG_PORT to use another port)"
+      return 1
+    fi
   fi
   export RIBBONRY_PG_DATA="$data" RIBBONRY_PG_BIN="$bindir"
 }
