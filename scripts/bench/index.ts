@@ -6,8 +6,13 @@ import { migrateDatabase } from "../../db/migrate";
 import { DEMO_PASSWORD } from "../../db/seed/demo-data";
 import { must, NEXT, profileEnv, recreateDatabase, ROOT, say, serve, startAll, waitForHealth } from "../lib/app";
 import { apiVsBare } from "./api-vs-bare";
+import { benchCategories } from "./categories";
+import { benchPhotos } from "./photos";
 
 async function main() {
+  // Pure computations first, while the machine is quiet.
+  await benchCategories();
+  await benchPhotos();
   const env = profileEnv("test");
   const durationSec = Number(process.env.BENCH_SECONDS ?? 10);
   say("bench: fresh database, fakes, build, demo show");
