@@ -8,6 +8,7 @@ import { cx } from "@/components/ui/cx";
 import { EmptyState } from "@/components/ui/empty-state";
 import { Table, TBody, Td, Th, THead, Tr } from "@/components/ui/table";
 import { formatSize } from "@/scoring/units";
+import { useDeskEntries } from "./queries";
 
 export type DeskEntry = {
   entryNumber: number | null;
@@ -24,7 +25,8 @@ const norm = (s: string) =>
     .normalize("NFKD")
     .replace(/[\u0300-\u036f]/g, "");
 
-export function IntakeTable({ entries }: { entries: DeskEntry[] }) {
+export function IntakeTable({ showSlug, initialEntries }: { showSlug: string; initialEntries: DeskEntry[] }) {
+  const { data: entries, error, dataUpdatedAt, isFetching } = useDeskEntries(showSlug, initialEntries);
   const [query, setQuery] = useState("");
   const deferred = useDeferredValue(query);
   const id = useId();
@@ -59,6 +61,13 @@ export function IntakeTable({ entries }: { entries: DeskEntry[] }) {
         </div>
         <p id={`${id}-count`} aria-live="polite" className="text-ink-muted">
           {query.trim() ? `${shown.length} of ${entries.length} entries match.` : `${entries.length} entries.`}
+        </p>
+        <p className="text-sm text-ink-muted" aria-live="polite" suppressHydrationWarning>
+          {error
+            ? `Showing the list from ${new Date(dataUpdatedAt).toLocaleTimeString()}: ${error.message}`
+            : isFetching
+              ? "Refreshing…"
+              : `Up to date as of ${new Date(dataUpdatedAt).toLocaleTimeString()}; refreshes every 30 seconds.`}
         </p>
       </div>
       {shown.length === 0 ? (

@@ -22,7 +22,7 @@ export function SiteHeader({ nav }: { nav: ShellNav }) {
   const links = nav.user ? nav.personal.filter((l) => l.icon !== "account") : nav.personal.filter((l) => l.icon === "signIn");
   const account = nav.personal.find((l) => l.icon === "account");
   return (
-    <header className="on-dark sticky top-0 z-30 bg-plum-900 text-paper-100 shadow-[0_1px_0_var(--color-plum-700)]">
+    <header data-site-header className="on-dark sticky top-0 z-30 bg-plum-900 text-paper-100 shadow-[0_1px_0_var(--color-plum-700)]">
       <div className="container-page flex min-h-16 items-center gap-2 py-2">
         <Link href="/" className="mr-2 inline-flex min-h-tap items-center gap-2 rounded-control pr-2 text-paper-50 no-underline">
           <RibbonMark className="size-9" />

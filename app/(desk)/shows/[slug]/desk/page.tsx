@@ -26,7 +26,7 @@ export default async function DeskPage({ params }: Props) {
         Entrants’ names are here so you can match quilts to people at the desk. Don’t share or photograph this screen.
       </Alert>
       {list.entries.length ? (
-        <IntakeTable entries={list.entries} />
+        <IntakeTable showSlug={list.show.slug} initialEntries={list.entries} />
       ) : (
         <EmptyState icon={Inbox} title="No entries yet">
           Entries appear here once quilters send them to the show.
