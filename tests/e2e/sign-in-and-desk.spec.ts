@@ -6,7 +6,7 @@ import { DEMO_SHOW, expectNoSidewaysScroll, shootAllWidths, signIn, VIEWPORTS } 
 test("home page lists the demo show, and a wrong password is explained", async ({ page }) => {
   await page.setViewportSize(VIEWPORTS.phone);
   await page.goto("/");
-  await expect(page.getByText("Pennywhistle Falls Quilt Show 2027").first()).toBeVisible();
+  await expect(page.getByRole("main").getByText("Pennywhistle Falls Quilt Show 2027").first()).toBeVisible();
   await expectNoSidewaysScroll(page);
   await shootAllWidths(page, "home");
 

@@ -4,104 +4,9 @@
 import { readdirSync, statSync } from "node:fs";
 import path from "node:path";
 import { beforeAll, describe, expect, it } from "vitest";
-import { db } from "@/db/client";
-import { createInvitation } from "@/db/queries/invitations";
-import { showRoles } from "@/db/schema";
 import { actAs } from "../../helpers/request-context";
-import { grantRole, makeEntry, makeShow, makeUser, unique, type TestUser } from "../../helpers/factories";
-
-const ROLES = ["anonymous", "entrant", "judge", "scribe", "intake", "chair", "admin", "otherChair"] as const;
-type Role = (typeof ROLES)[number];
-type Expect = Record<Role, number>;
-
-/** Same answer for everyone but the anonymous caller and the allowed roles. */
-function only(allowed: Partial<Record<Role, number>>, others = 403): Expect {
-  const out = Object.fromEntries(ROLES.map((r) => [r, r === "anonymous" ? 401 : others])) as Expect;
-  return { ...out, ...allowed };
-}
-const everyone = (status: number) => Object.fromEntries(ROLES.map((r) => [r, status])) as Expect;
-const signedIn = (status: number) => ({ ...everyone(status), anonymous: 401 });
-
-type World = {
-  show: { id: string; slug: string; name: string };
-  users: Record<Exclude<Role, "anonymous">, TestUser>;
-};
-
-type Case = {
-  expect: Expect;
-  /** Builds the call for one caller; may create the rows that call needs. */
-  request?: (w: World, role: Role) => Promise<{ params?: Record<string, string>; body?: unknown; query?: string }>;
-  input?: (w: World, role: Role) => Promise<Record<string, unknown>>;
-};
-
-const ROUTES: Record<string, Case> = {
-  "GET /api/health": { expect: everyone(200) },
-  "GET /api/me": { expect: signedIn(200) },
-  "GET /api/me/entries": { expect: signedIn(200) },
-  "GET /api/shows": { expect: everyone(200) },
-  "POST /api/shows": {
-    expect: only({ admin: 201 }),
-    request: async () => ({ body: { name: "Autumn Test Show", slug: unique("autumn"), guildName: "Guild", venueName: "Hall", timeZone: "America/Chicago", chairEmail: `${unique("c")}@example.test` } }),
-  },
-  "GET /api/shows/[slug]": { expect: everyone(200), request: async (w) => ({ params: { slug: w.show.slug } }) },
-  "GET /api/shows/[slug]/team": { expect: only({ chair: 200 }), request: async (w) => ({ params: { slug: w.show.slug } }) },
-  "POST /api/shows/[slug]/team": {
-    expect: only({ chair: 201 }),
-    request: async (w) => ({ params: { slug: w.show.slug }, body: { email: `${unique("j")}@example.test`, role: "judge" } }),
-  },
-  "GET /api/shows/[slug]/judging/queue": { expect: only({ judge: 200, scribe: 200 }), request: async (w) => ({ params: { slug: w.show.slug } }) },
-  "GET /api/shows/[slug]/desk/entries": { expect: only({ intake: 200, chair: 200 }), request: async (w) => ({ params: { slug: w.show.slug } }) },
-  "GET /api/invitations/[token]": {
-    expect: everyone(200),
-    request: async (w) => ({ params: { token: await invite(w, w.users.entrant.email, "judge") } }),
-  },
-  // The invitation is the entrant's: anyone else signed in is the wrong person (403).
-  "POST /api/invitations/[token]/accept": {
-    expect: only({ entrant: 201 }),
-    request: async (w) => ({ params: { token: await invite(w, w.users.entrant.email, "scribe") } }),
-  },
-  // Webhooks carry no session; an unsigned delivery is refused whoever sends it.
-  "POST /api/payments/webhook": { expect: everyone(400), request: async () => ({ body: { id: "evt_unsigned" } }) },
-};
-
-// better-auth's own endpoints are tested in tests/integration/auth; they are listed so that the
-// discovery check below still accounts for the file.
-const DELEGATED = new Set(["GET /api/auth/[...all]", "POST /api/auth/[...all]"]);
-
-const ACTIONS: Record<string, Case> = {
-  "(admin)/admin#createShowAction": {
-    expect: only({ admin: 200 }),
-    input: async () => ({ name: "Action Test Show", slug: unique("action"), guildName: "Guild", venueName: "Hall", timeZone: "Europe/London", chairEmail: `${unique("c")}@example.test` }),
-  },
-  "(chair)/shows/[slug]/manage#inviteAction": {
-    expect: only({ chair: 200 }),
-    input: async (w) => ({ showSlug: w.show.slug, email: `${unique("s")}@example.test`, role: "scribe" }),
-  },
-  "(chair)/shows/[slug]/manage#removeMemberAction": {
-    expect: only({ chair: 200 }),
-    input: async (w) => {
-      const helper = await makeUser();
-      const [row] = await db.insert(showRoles).values({ showId: w.show.id, userId: helper.id, role: "scribe" }).returning();
-      return { showSlug: w.show.slug, roleId: row!.id };
-    },
-  },
-  // Success redirects to the role's area (303 here); the wrong person gets 403.
-  "invitations/[token]#acceptInvitationAction": {
-    expect: only({ entrant: 303 }),
-    input: async (w) => ({ token: await invite(w, w.users.entrant.email, "intake") }),
-  },
-  "(entrant)/account#saveProfileAction": {
-    expect: signedIn(200),
-    input: async () => ({ displayName: "Pat Example", phone: "555-0100", publishNameConsent: "on" }),
-  },
-};
-
-async function invite(w: World, email: string, role: "judge" | "scribe" | "intake"): Promise<string> {
-  const inviter = { ...w.users.chair, isAdmin: false, roles: [] };
-  // A show of its own per call: once accepted, a second invitation to the same role would be a 409.
-  const show = await makeShow();
-  return db.transaction((tx) => createInvitation(tx, inviter, show.id, { email, role }));
-}
+import { grantRole, makeEntry, makeShow, makeUser } from "../../helpers/factories";
+import { ROLES, type Case, type World } from "./table";
 
 const APP = path.join(process.cwd(), "app");
 
@@ -135,6 +40,29 @@ async function discoverActions(): Promise<Map<string, (...a: unknown[]) => Promi
   }
   return found;
 }
+
+/** Every rows/*.ts file's routes, actions and delegated endpoints; a key in two files is an error. */
+async function loadRows() {
+  const routes: Record<string, Case> = {};
+  const actions: Record<string, Case> = {};
+  const delegated = new Set<string>();
+  const dir = path.join(__dirname, "rows");
+  for (const name of readdirSync(dir).filter((n) => n.endsWith(".ts")).sort()) {
+    const mod = (await import(path.join(dir, name))) as { routes?: Record<string, Case>; actions?: Record<string, Case>; delegated?: Set<string> };
+    for (const [k, v] of Object.entries(mod.routes ?? {})) {
+      if (k in routes) throw new Error(`${k} has rows in two files`);
+      routes[k] = v;
+    }
+    for (const [k, v] of Object.entries(mod.actions ?? {})) {
+      if (k in actions) throw new Error(`${k} has rows in two files`);
+      actions[k] = v;
+    }
+    for (const k of mod.delegated ?? []) delegated.add(k);
+  }
+  return { routes, actions, delegated };
+}
+
+const { routes: ROUTES, actions: ACTIONS, delegated: DELEGATED } = await loadRows();
 
 let world: World;
 let routes: Map<string, Record<string, unknown>>;
