@@ -56,6 +56,27 @@ export const entries = pgTable(
     patternSource: text().notNull().default("original"),
     statement: text().notNull().default(""),
     declaredValueCents: integer().notNull().default(0),
+    /** The unit the entrant typed the size in, so the form shows it back the same way. */
+    sizeUnit: text().notNull().default("in"),
+    patternName: text().notNull().default(""),
+    patternDesigner: text().notNull().default(""),
+    forSale: boolean().notNull().default(false),
+    priceCents: integer(),
+    youthAge: integer(),
+    critiqueRequested: boolean().notNull().default(false),
+    /** Which rules/release text the entrant accepted, and when. */
+    rulesVersionId: uuid(),
+    rulesAcceptedAt: timestamp({ withTimezone: true }),
+    submittedAt: timestamp({ withTimezone: true }),
+    /** Over the show's capacity when submitted: waits for a place. */
+    waitlisted: boolean().notNull().default(false),
+    decisionReason: text().notNull().default(""),
+    /** Jurying: the chair's decision is recorded here and mailed only when released. */
+    decisionReleasedAt: timestamp({ withTimezone: true }),
+    paidAt: timestamp({ withTimezone: true }),
+    /** "stripe" or an offline reference such as "cash" / "cheque 1042". */
+    paymentReference: text().notNull().default(""),
+    withdrawnAt: timestamp({ withTimezone: true }),
     judged: boolean().notNull().default(true),
     division: division().notNull().default("open"),
     status: entryStatus().notNull().default("draft"),
@@ -67,6 +88,7 @@ export const entries = pgTable(
     index("entries_entrant").on(t.entrantUserId),
     check("entries_size_positive", sql`${t.widthUm} > 0 and ${t.lengthUm} > 0`),
     check("entries_value_nonnegative", sql`${t.declaredValueCents} >= 0`),
+    check("entries_size_unit", sql`${t.sizeUnit} in ('in', 'cm')`),
   ],
 );
 
@@ -80,8 +102,10 @@ export const entryPhotos = pgTable(
       .notNull()
       .references(() => entries.id, { onDelete: "cascade" }),
     view: photoView().notNull(),
-    /** Object key in the private photo bucket. */
+    /** Object keys in the private photo bucket: the stripped original, the web size, the thumbnail. */
     storageKey: text().notNull().unique(),
+    webKey: text(),
+    thumbKey: text(),
     widthPx: integer().notNull(),
     heightPx: integer().notNull(),
     bytes: integer().notNull(),

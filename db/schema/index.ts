@@ -1,6 +1,7 @@
 // Every table of the app, for the Drizzle client and drizzle-kit.
 export * from "./auth";
 export * from "./shows";
+export * from "./settings";
 export * from "./people";
 export * from "./entries";
 export * from "./payments";

@@ -1,6 +1,9 @@
 // Payment events received from the payments provider's webhook, kept once per event id so a
 // replayed delivery is recognised and never counted twice.
-import { jsonb, pgTable, text, timestamp } from "drizzle-orm/pg-core";
+import { index, integer, jsonb, pgEnum, pgTable, text, timestamp, uuid } from "drizzle-orm/pg-core";
+import { user } from "./auth";
+import { entries } from "./entries";
+import { shows } from "./shows";
 
 export const paymentEvents = pgTable("payment_events", {
   eventId: text().primaryKey(),
@@ -11,3 +14,44 @@ export const paymentEvents = pgTable("payment_events", {
   createdAt: timestamp({ withTimezone: true }).notNull(),
   receivedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
 });
+
+export const paymentStatus = pgEnum("payment_status", ["open", "paid", "expired", "refunded", "partially_refunded"]);
+
+/** One checkout: the entries an entrant paid for together, and what was charged. */
+export const payments = pgTable(
+  "payments",
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    showId: uuid()
+      .notNull()
+      .references(() => shows.id, { onDelete: "cascade" }),
+    entrantUserId: text()
+      .notNull()
+      .references(() => user.id, { onDelete: "restrict" }),
+    checkoutSessionId: text().unique(),
+    amountCents: integer().notNull(),
+    refundedCents: integer().notNull().default(0),
+    currency: text().notNull(),
+    status: paymentStatus().notNull().default("open"),
+    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+    paidAt: timestamp({ withTimezone: true }),
+  },
+  (t) => [index("payments_entrant").on(t.entrantUserId)],
+);
+
+export const paymentItems = pgTable(
+  "payment_items",
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    paymentId: uuid()
+      .notNull()
+      .references(() => payments.id, { onDelete: "cascade" }),
+    entryId: uuid()
+      .notNull()
+      .references(() => entries.id, { onDelete: "cascade" }),
+    /** What this entry costs in this checkout: entry fee (or its share under the cap), late and critique fees. */
+    amountCents: integer().notNull(),
+    description: text().notNull(),
+  },
+  (t) => [index("payment_items_entry").on(t.entryId)],
+);

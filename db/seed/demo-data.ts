@@ -495,3 +495,40 @@ export function demoScenario(): DemoScenario {
 
 /** Every demo sign-in (all share DEMO_PASSWORD), for the start script and the README. */
 export const DEMO_ACCOUNTS: readonly DemoAccount[] = demoScenario().people.map(({ role, name, email }) => ({ role, name, email }));
+
+/** The demo show's settings: fees in cents, limits, photo rules (one show's published rule: at
+ *  least 1000 × 500 px, at most 5 MB). Amounts are invented for the scenario. */
+export const DEMO_SETTINGS = {
+  lateFeeFromAt: iso("2027-01-16T00:00:00-06:00"),
+  entryFeeCents: 2500,
+  memberEntryFeeCents: 2000,
+  lateFeeCents: 1000,
+  critiqueFeeCents: 500,
+  feeCapCents: 10000,
+  withdrawalRefundPercent: 50,
+  currency: "usd",
+  maxEntriesPerEntrant: 5,
+  maxEntriesPerCategory: 2,
+  capacity: 200,
+  requiredPhotoViews: ["full", "detail"],
+  photoMinWidthPx: 1000,
+  photoMinHeightPx: 500,
+  photoMaxBytes: 5_000_000,
+  statementWordLimit: 150,
+  techniques: ["pieced", "appliqué", "mixed", "art", "modern", "wholecloth", "paper piecing", "English paper piecing", "embroidery"],
+  juried: false,
+  publishNames: true,
+  replyToEmail: "show@pennywhistle-quilters.test",
+};
+
+export const DEMO_RULES = {
+  rulesText: [
+    "1. Quilts must be finished by the entrant within the last three years and not shown at this show before.",
+    "2. Each quilt needs a 4-inch hanging sleeve sewn to the top of the back and a label sewn to the lower right corner of the back with the entrant's name.",
+    "3. Register the size as width (side to side) × length (top to bottom); the intake desk re-measures, and a quilt more than 1 inch off its registered size may be moved to another category.",
+    "4. Bring each quilt in a cloth bag or pillowcase marked with your name and entry number.",
+    "5. Quilts stay in the show until it closes; pick-up is against the claim ticket only.",
+  ].join("\n"),
+  releaseText:
+    "The Pennywhistle Falls Quilters' Guild takes every reasonable care of the quilts in its keeping but does not insure them. I enter at my own risk, release the guild and its volunteers from liability for loss or damage, and agree that photographs of my quilt may be used to publicise the show.",
+};

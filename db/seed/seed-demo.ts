@@ -8,7 +8,7 @@ import type { PgDatabase } from "drizzle-orm/pg-core";
 import type { PostgresJsQueryResultHKT } from "drizzle-orm/postgres-js";
 import * as schema from "../schema";
 import { photoSizeFor, renderPatchwork, type PatchworkView } from "../../storage/patchwork";
-import { DEMO_PASSWORD, demoScenario, type DemoQuilt, type DemoShowRole } from "./demo-data";
+import { DEMO_PASSWORD, DEMO_RULES, DEMO_SETTINGS, demoScenario, type DemoQuilt, type DemoShowRole } from "./demo-data";
 
 /**
  * The database handle the seeder needs. A PostgresJsDatabase<typeof schema> fits; so does one of
@@ -111,6 +111,7 @@ export async function seedDemo(opts: SeedDemoOptions): Promise<{ created: boolea
     const grantedBy = p.role === "chair" ? adminId : chairId;
     return [{ id: randomUUID(), showId, userId: idOf(p.email), role: p.role, grantedBy, createdAt: new Date(p.joinedAt) }];
   });
+  const rulesVersionId = randomUUID();
   const entryRows: EntryRow[] = scenario.quilts.map((q) => ({
     id: randomUUID(),
     showId,
@@ -130,6 +131,11 @@ export async function seedDemo(opts: SeedDemoOptions): Promise<{ created: boolea
     judged: q.judged,
     division: q.division,
     status: q.status,
+    rulesVersionId: q.status === "draft" ? null : rulesVersionId,
+    rulesAcceptedAt: q.status === "draft" ? null : new Date(q.updatedAt),
+    submittedAt: q.status === "draft" ? null : new Date(q.updatedAt),
+    paidAt: q.status === "paid" ? new Date(q.updatedAt) : null,
+    paymentReference: q.status === "paid" ? "demo" : "",
     createdAt: new Date(q.createdAt),
     updatedAt: new Date(q.updatedAt),
   }));
@@ -165,6 +171,10 @@ export async function seedDemo(opts: SeedDemoOptions): Promise<{ created: boolea
     await tx.insert(schema.entrantProfiles).values(profiles);
     await tx.insert(schema.shows).values(showRow);
     await tx.insert(schema.showRoles).values(roles);
+    await tx.insert(schema.showSettings).values({ showId, ...DEMO_SETTINGS, lateFeeFromAt: new Date(DEMO_SETTINGS.lateFeeFromAt) });
+    await tx.insert(schema.showRulesVersions).values({ id: rulesVersionId, showId, version: 1, ...DEMO_RULES, publishedBy: chairId, publishedAt: showCreatedAt });
+    const lastNumber = Math.max(100, ...entryRows.map((e) => e.entryNumber ?? 0));
+    await tx.insert(schema.showEntryCounters).values({ showId, lastNumber });
     await tx.insert(schema.entries).values(entryRows);
     log(`rows written for ${users.length} people and ${entryRows.length} entries; rendering ${photoJobs.length} photos`);
 

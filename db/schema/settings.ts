@@ -1,0 +1,68 @@
+// What a chair sets for a show: fees, limits, photo requirements, and the versioned rules and
+// release text entrants accept. One settings row per show; every rules version is kept.
+import { boolean, integer, pgTable, text, timestamp, uniqueIndex, uuid } from "drizzle-orm/pg-core";
+import { sql } from "drizzle-orm";
+import { user } from "./auth";
+import { shows } from "./shows";
+
+export const showSettings = pgTable("show_settings", {
+  showId: uuid()
+    .primaryKey()
+    .references(() => shows.id, { onDelete: "cascade" }),
+  /** After this moment the late fee applies (UTC; shown in the show's zone). */
+  lateFeeFromAt: timestamp({ withTimezone: true }),
+  entryFeeCents: integer().notNull().default(0),
+  memberEntryFeeCents: integer().notNull().default(0),
+  lateFeeCents: integer().notNull().default(0),
+  critiqueFeeCents: integer().notNull().default(0),
+  /** Most one entrant pays in entry fees (late and critique fees come on top); null = no cap. */
+  feeCapCents: integer(),
+  /** Share of the entry fee refunded on withdrawal before entries close, in percent. */
+  withdrawalRefundPercent: integer().notNull().default(100),
+  currency: text().notNull().default("usd"),
+  maxEntriesPerEntrant: integer(),
+  maxEntriesPerCategory: integer(),
+  /** Total entries the show accepts; later ones go to the waiting list. */
+  capacity: integer(),
+  requiredPhotoViews: text().array().notNull().default(sql`'{full,detail}'::text[]`),
+  photoMinWidthPx: integer().notNull().default(1000),
+  photoMinHeightPx: integer().notNull().default(500),
+  photoMaxBytes: integer().notNull().default(5_000_000),
+  statementWordLimit: integer().notNull().default(150),
+  /** Techniques the entry form offers. */
+  techniques: text()
+    .array()
+    .notNull()
+    .default(sql`'{pieced,appliqué,mixed,art,modern,wholecloth,paper piecing,embroidery}'::text[]`),
+  juried: boolean().notNull().default(false),
+  publishNames: boolean().notNull().default(true),
+  replyToEmail: text().notNull().default(""),
+  updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+});
+
+export const showRulesVersions = pgTable(
+  "show_rules_versions",
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    showId: uuid()
+      .notNull()
+      .references(() => shows.id, { onDelete: "cascade" }),
+    version: integer().notNull(),
+    rulesText: text().notNull(),
+    releaseText: text().notNull(),
+    publishedBy: text().references(() => user.id, { onDelete: "set null" }),
+    publishedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [uniqueIndex("show_rules_versions_show_version").on(t.showId, t.version)],
+);
+
+/** The last entry number handed out per show, so numbers are never reused. */
+export const showEntryCounters = pgTable("show_entry_counters", {
+  showId: uuid()
+    .primaryKey()
+    .references(() => shows.id, { onDelete: "cascade" }),
+  lastNumber: integer().notNull().default(100),
+});
+
+export type ShowSettings = typeof showSettings.$inferSelect;
+export type RulesVersion = typeof showRulesVersions.$inferSelect;
