@@ -1,12 +1,14 @@
 // Loopback ports and environments for the two ways Ribbonry runs here: `npm start` (dev) and
-// `npm test` (test). Both may run at once; they share the PostgreSQL server, not the database.
-export type Profile = "start" | "test";
+// `npm test` (test), and `npm run bench` (bench). All may run at once; they share the PostgreSQL
+// server, not the database.
+export type Profile = "start" | "test" | "bench";
 
 export const PG_PORT = Number(process.env.RIBBONRY_PG_PORT ?? 54329);
 
 const ports = {
   start: { app: 3000, s3: 4569, smtp: 1025, mailWeb: 1080, payments: 12111 },
   test: { app: 3100, s3: 4579, smtp: 1035, mailWeb: 1090, payments: 12121 },
+  bench: { app: 3200, s3: 4589, smtp: 1045, mailWeb: 1100, payments: 12131 },
 } as const;
 
 export function portsFor(profile: Profile) {
@@ -16,8 +18,8 @@ export function portsFor(profile: Profile) {
 /** The environment the app, the fakes and the tests share for a profile (defaults only). */
 export function envFor(profile: Profile): Record<string, string> {
   const p = ports[profile];
-  const database = profile === "test" ? "ribbonry_test" : "ribbonry";
-  const appUrl = profile === "test" ? `http://127.0.0.1:${p.app}` : `http://localhost:${p.app}`;
+  const database = profile === "start" ? "ribbonry" : `ribbonry_${profile}`;
+  const appUrl = profile === "start" ? `http://localhost:${p.app}` : `http://127.0.0.1:${p.app}`;
   return {
     APP_URL: appUrl,
     PORT: String(p.app),

@@ -53,7 +53,7 @@ export async function startServices(opts: ServicesOptions): Promise<Services> {
   const quiet = opts.quiet ?? false;
   const s3Dir = path.join(opts.dataDir, "s3");
   const mailDir = path.join(opts.dataDir, "mail");
-  if (opts.fresh ?? opts.profile === "test") {
+  if (opts.fresh ?? opts.profile !== "start") {
     await fs.rm(s3Dir, { recursive: true, force: true });
     await fs.rm(mailDir, { recursive: true, force: true });
   }
@@ -179,8 +179,8 @@ async function wrapListen<T>(p: Promise<T>, port: number, what: string): Promise
 
 async function main(): Promise<void> {
   const arg = process.argv[2] ?? "start";
-  if (arg !== "start" && arg !== "test") {
-    console.error("usage: tsx scripts/services.ts [start|test]");
+  if (arg !== "start" && arg !== "test" && arg !== "bench") {
+    console.error("usage: tsx scripts/services.ts [start|test|bench]");
     process.exit(2);
   }
   const profile: Profile = arg;

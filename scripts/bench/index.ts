@@ -13,12 +13,12 @@ async function main() {
   // Pure computations first, while the machine is quiet.
   await benchCategories();
   await benchPhotos();
-  const env = profileEnv("test");
+  const env = profileEnv("bench");
   const durationSec = Number(process.env.BENCH_SECONDS ?? 10);
   say("bench: fresh database, fakes, build, demo show");
   await recreateDatabase(env.DATABASE_URL!);
   await migrateDatabase(env.DATABASE_URL!);
-  const services = await startAll("test", env);
+  const services = await startAll("bench", env);
   let app: ChildProcess | undefined;
   try {
     if (process.env.BENCH_SKIP_BUILD !== "1") await must("next build", process.execPath, [NEXT, "build"], env);

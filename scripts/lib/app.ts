@@ -14,7 +14,7 @@ export type Env = Record<string, string>;
 
 export function profileEnv(profile: Profile): Env {
   const base = envFor(profile);
-  if (profile === "test") {
+  if (profile !== "start") {
     // Tests own their settings; only a test database may be pointed elsewhere.
     if (process.env.TEST_DATABASE_URL) base.DATABASE_URL = process.env.TEST_DATABASE_URL;
     return { ...base, NODE_ENV: "production", NEXT_TELEMETRY_DISABLED: "1" };
