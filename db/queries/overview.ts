@@ -3,6 +3,7 @@ import "server-only";
 import { count, eq } from "drizzle-orm";
 import { db } from "@/db/client";
 import { entries, shows } from "@/db/schema";
+import { showDateColumns } from "@/db/queries/shows";
 import { requireShowRole, type Viewer } from "@/lib/session";
 
 export async function chairOverview(viewer: Viewer, showSlug: string) {
@@ -15,16 +16,7 @@ export async function chairOverview(viewer: Viewer, showSlug: string) {
       timeZone: shows.timeZone,
       guildName: shows.guildName,
       venueName: shows.venueName,
-      entryOpensAt: shows.entryOpensAt,
-      entryClosesAt: shows.entryClosesAt,
-      dropOffStartsAt: shows.dropOffStartsAt,
-      dropOffEndsAt: shows.dropOffEndsAt,
-      judgingStartsAt: shows.judgingStartsAt,
-      judgingEndsAt: shows.judgingEndsAt,
-      showOpensAt: shows.showOpensAt,
-      showClosesAt: shows.showClosesAt,
-      pickUpStartsAt: shows.pickUpStartsAt,
-      pickUpEndsAt: shows.pickUpEndsAt,
+      ...showDateColumns,
     })
     .from(shows)
     .where(eq(shows.id, showId));

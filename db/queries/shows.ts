@@ -9,15 +9,8 @@ import { conflict, isUniqueViolation, notFound } from "@/lib/errors";
 import type { CreateShowInput } from "@/lib/schemas/show";
 import { requireAdmin, type Viewer } from "@/lib/session";
 
-const publicColumns = {
-  id: shows.id,
-  slug: shows.slug,
-  name: shows.name,
-  guildName: shows.guildName,
-  venueName: shows.venueName,
-  venueAddress: shows.venueAddress,
-  timeZone: shows.timeZone,
-  status: shows.status,
+/** The dates of each stage of a show, for every screen that lists them. */
+export const showDateColumns = {
   entryOpensAt: shows.entryOpensAt,
   entryClosesAt: shows.entryClosesAt,
   dropOffStartsAt: shows.dropOffStartsAt,
@@ -28,6 +21,18 @@ const publicColumns = {
   showClosesAt: shows.showClosesAt,
   pickUpStartsAt: shows.pickUpStartsAt,
   pickUpEndsAt: shows.pickUpEndsAt,
+};
+
+const publicColumns = {
+  id: shows.id,
+  slug: shows.slug,
+  name: shows.name,
+  guildName: shows.guildName,
+  venueName: shows.venueName,
+  venueAddress: shows.venueAddress,
+  timeZone: shows.timeZone,
+  status: shows.status,
+  ...showDateColumns,
 };
 
 export type PublicShow = Awaited<ReturnType<typeof publicShowBySlug>> & {};
