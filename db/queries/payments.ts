@@ -1,8 +1,24 @@
-// Payment webhook events, stored once per event id so redelivered or replayed events change nothing.
+// Entry fees: starting a checkout for an entrant's entries, applying the provider's webhook events
+// (stored once per event id so redelivered or replayed events change nothing), and withdrawals.
+//
+// The rule for events arriving out of order: a payment only moves forward. open → paid,
+// open → expired, expired → paid (the provider took the money, so that wins), and paid never goes
+// back to open or expired. A second "completed" for a payment already paid (a different event id
+// for the same session) changes nothing. Entries are marked paid only while still unpaid.
 import "server-only";
+import { randomUUID } from "node:crypto";
+import { and, asc, eq, inArray, isNull, ne } from "drizzle-orm";
 import type Stripe from "stripe";
 import { db, type Tx } from "@/db/client";
-import { paymentEvents } from "@/db/schema";
+import { writeAudit } from "@/db/queries/audit";
+import { settingsForShowId } from "@/db/queries/settings";
+import { entrantProfiles, entries, paymentEvents, paymentItems, payments, shows } from "@/db/schema";
+import { formatDateTime } from "@/components/format/dates";
+import { env } from "@/lib/env";
+import { badInput, conflict, notFound } from "@/lib/errors";
+import { stripe } from "@/lib/payments";
+import type { Viewer } from "@/lib/session";
+import { feeKindOf, formatMoney, isGuildMember, quoteFees, withdrawalRefundCents, type FeeSchedule } from "@/scoring/fees";
 
 /**
  * Records the event; `apply` (e.g. marking an entry fee paid) runs in the same transaction and only
@@ -30,3 +46,280 @@ export async function recordPaymentEvent(
     return { duplicate: false };
   });
 }
+
+// Statuses in which the money was taken (some may since have been refunded).
+const CHARGED = ["paid", "partially_refunded", "refunded"] as const;
+
+type ShowForFees = { id: string; slug: string; name: string; guildName: string; entryClosesAt: Date | null; timeZone: string };
+
+async function showBySlug(reader: Pick<Tx, "select">, slug: string): Promise<ShowForFees> {
+  const [show] = await reader
+    .select({ id: shows.id, slug: shows.slug, name: shows.name, guildName: shows.guildName, entryClosesAt: shows.entryClosesAt, timeZone: shows.timeZone })
+    .from(shows)
+    .where(eq(shows.slug, slug))
+    .limit(1);
+  if (!show) throw notFound("There is no show at this address.");
+  return show;
+}
+
+async function memberAt(reader: Pick<Tx, "select">, userId: string, guildName: string): Promise<boolean> {
+  const [profile] = await reader.select({ guild: entrantProfiles.guild }).from(entrantProfiles).where(eq(entrantProfiles.userId, userId)).limit(1);
+  return isGuildMember(profile?.guild, guildName);
+}
+
+/** Entry fees the entrant has been charged at this show for entries still in it (what the cap counts). */
+async function entryFeesPaidCents(reader: Pick<Tx, "select">, userId: string, showId: string): Promise<number> {
+  const rows = await reader
+    .select({ amountCents: paymentItems.amountCents, description: paymentItems.description })
+    .from(paymentItems)
+    .innerJoin(payments, eq(payments.id, paymentItems.paymentId))
+    .innerJoin(entries, eq(entries.id, paymentItems.entryId))
+    .where(and(eq(payments.entrantUserId, userId), eq(payments.showId, showId), inArray(payments.status, [...CHARGED]), ne(entries.status, "withdrawn")));
+  return rows.filter((r) => feeKindOf(r.description) === "entry").reduce((sum, r) => sum + r.amountCents, 0);
+}
+
+const scheduleOf = (s: Awaited<ReturnType<typeof settingsForShowId>>): FeeSchedule => ({
+  entryFeeCents: s.entryFeeCents,
+  memberEntryFeeCents: s.memberEntryFeeCents,
+  lateFeeCents: s.lateFeeCents,
+  lateFeeFromAt: s.lateFeeFromAt,
+  critiqueFeeCents: s.critiqueFeeCents,
+  feeCapCents: s.feeCapCents,
+});
+
+/**
+ * Open checkouts holding any of these entries are expired first, so one entry can never be paid
+ * through two live sessions. A session the provider already completed is left to its webhook.
+ */
+async function expireOpenPaymentsFor(tx: Tx, actorUserId: string, entryIds: string[]): Promise<void> {
+  if (entryIds.length === 0) return;
+  const open = await tx
+    .selectDistinct({ id: payments.id, showId: payments.showId, checkoutSessionId: payments.checkoutSessionId })
+    .from(payments)
+    .innerJoin(paymentItems, eq(paymentItems.paymentId, payments.id))
+    .where(and(inArray(paymentItems.entryId, entryIds), eq(payments.status, "open")));
+  for (const p of open) {
+    if (p.checkoutSessionId) {
+      try {
+        await stripe.checkout.sessions.expire(p.checkoutSessionId);
+      } catch (err) {
+        const session = await stripe.checkout.sessions.retrieve(p.checkoutSessionId).catch(() => null);
+        if (session?.status === "complete") {
+          throw conflict("A payment for these entries has just gone through and is being confirmed. Reload this page in a minute.");
+        }
+        if (session?.status !== "expired") throw err;
+      }
+    }
+    const updated = await tx
+      .update(payments)
+      .set({ status: "expired" })
+      .where(and(eq(payments.id, p.id), eq(payments.status, "open")))
+      .returning({ id: payments.id });
+    if (updated.length) {
+      await writeAudit(tx, { actorUserId, showId: p.showId, action: "payment.expired", subjectType: "payment", subjectId: p.id, before: { status: "open" }, after: { status: "expired", reason: "replaced" } });
+    }
+  }
+}
+
+export type CheckoutStarted = { paymentId: string; url: string; totalCents: number };
+
+/**
+ * Starts one checkout for several of the viewer's own entries at a show (sent, not on the waiting
+ * list, not paid). The payment row, its lines and the audit row are written in one transaction
+ * together with the provider's session, so a failure leaves nothing behind. With nothing to pay
+ * (free show, or the cap already reached) the entries are marked paid at once.
+ */
+export async function startCheckout(viewer: Viewer, input: { showSlug: string; entryIds: string[] }): Promise<CheckoutStarted> {
+  const show = await showBySlug(db, input.showSlug);
+  const settings = await settingsForShowId(show.id);
+  const ids = [...new Set(input.entryIds)];
+  if (ids.length === 0) throw badInput("Choose at least one entry to pay for.", { entryIds: ["Choose at least one entry to pay for."] });
+  const paymentId = randomUUID();
+  const now = new Date();
+
+  return db.transaction(async (tx) => {
+    const rows = await tx
+      .select({ id: entries.id, entryNumber: entries.entryNumber, title: entries.title, status: entries.status, waitlisted: entries.waitlisted, paidAt: entries.paidAt, critiqueRequested: entries.critiqueRequested })
+      .from(entries)
+      .where(and(inArray(entries.id, ids), eq(entries.entrantUserId, viewer.id), eq(entries.showId, show.id)))
+      .orderBy(asc(entries.entryNumber))
+      .for("update");
+    if (rows.length !== ids.length) throw notFound("One of these entries is not yours at this show.");
+    const unpayable = rows.find((r) => r.status !== "submitted" || r.waitlisted || r.paidAt !== null);
+    if (unpayable) {
+      const why = unpayable.paidAt ? "is already paid" : unpayable.waitlisted ? "is on the waiting list" : `is ${unpayable.status}`;
+      throw conflict(`Entry ${unpayable.entryNumber ?? unpayable.title} ${why}, so it cannot be paid now.`, { entryIds: [`Entry ${unpayable.entryNumber ?? unpayable.title} ${why}.`] });
+    }
+    await expireOpenPaymentsFor(tx, viewer.id, ids);
+
+    const quote = quoteFees({
+      schedule: scheduleOf(settings),
+      member: await memberAt(tx, viewer.id, show.guildName),
+      at: now,
+      entries: rows.map((r) => ({ entryId: r.id, entryNumber: r.entryNumber, title: r.title, critiqueRequested: r.critiqueRequested })),
+      entryFeesAlreadyPaidCents: await entryFeesPaidCents(tx, viewer.id, show.id),
+    });
+    const back = (q: string) => new URL(`/my?${q}`, env.APP_URL).toString();
+
+    if (quote.totalCents === 0) {
+      await tx.insert(payments).values({ id: paymentId, showId: show.id, entrantUserId: viewer.id, amountCents: 0, currency: settings.currency, status: "paid", paidAt: now });
+      await tx.update(entries).set({ status: "paid", paidAt: now, paymentReference: "no fee due", updatedAt: now }).where(inArray(entries.id, ids));
+      await writeAudit(tx, { actorUserId: viewer.id, showId: show.id, action: "payment.no_fee_due", subjectType: "payment", subjectId: paymentId, after: { entryIds: ids } });
+      return { paymentId, url: back(`paid=${paymentId}`), totalCents: 0 };
+    }
+
+    const session = await stripe.checkout.sessions.create(
+      {
+        mode: "payment",
+        line_items: quote.lines.map((l) => ({
+          price_data: { currency: settings.currency, unit_amount: l.amountCents, product_data: { name: l.description.slice(0, 250) } },
+          quantity: 1,
+        })),
+        metadata: { paymentId, showId: show.id },
+        client_reference_id: viewer.id,
+        customer_email: viewer.email,
+        success_url: back(`paid=${paymentId}`),
+        cancel_url: back(`cancelled=${paymentId}`),
+      },
+      { idempotencyKey: `checkout-${paymentId}` },
+    );
+    if (!session.url) throw new Error(`checkout session ${session.id} came back without a URL`);
+    await tx.insert(payments).values({ id: paymentId, showId: show.id, entrantUserId: viewer.id, checkoutSessionId: session.id, amountCents: quote.totalCents, currency: settings.currency, status: "open" });
+    await tx.insert(paymentItems).values(quote.lines.map((l) => ({ paymentId, entryId: l.entryId, amountCents: l.amountCents, description: l.description })));
+    await writeAudit(tx, {
+      actorUserId: viewer.id,
+      showId: show.id,
+      action: "payment.started",
+      subjectType: "payment",
+      subjectId: paymentId,
+      after: { checkoutSessionId: session.id, amountCents: quote.totalCents, entryIds: ids, member: quote.member, late: quote.late },
+    });
+    return { paymentId, url: session.url, totalCents: quote.totalCents };
+  });
+}
+
+/**
+ * Applies a verified webhook event inside recordPaymentEvent's transaction. Returns the payment
+ * that became paid, so the caller can mail the receipt once the transaction has committed.
+ */
+export async function applyPaymentEvent(tx: Tx, event: Stripe.Event): Promise<{ paidPaymentId: string | null }> {
+  const isPaid =
+    (event.type === "checkout.session.completed" || event.type === "checkout.session.async_payment_succeeded") &&
+    event.data.object.payment_status === "paid";
+  const isExpired = event.type === "checkout.session.expired" || event.type === "checkout.session.async_payment_failed";
+  if (!isPaid && !isExpired) return { paidPaymentId: null };
+  const session = event.data.object as Stripe.Checkout.Session;
+  const [payment] = await tx
+    .select({ id: payments.id, showId: payments.showId, status: payments.status, entrantUserId: payments.entrantUserId })
+    .from(payments)
+    .where(eq(payments.checkoutSessionId, session.id))
+    .for("update");
+  // Events about sessions we did not create (or whose metadata disagrees) are kept, not applied.
+  if (!payment || (session.metadata?.paymentId && session.metadata.paymentId !== payment.id)) return { paidPaymentId: null };
+
+  if (isExpired) {
+    if (payment.status !== "open") return { paidPaymentId: null };
+    await tx.update(payments).set({ status: "expired" }).where(eq(payments.id, payment.id));
+    await writeAudit(tx, { actorUserId: null, showId: payment.showId, action: "payment.expired", subjectType: "payment", subjectId: payment.id, before: { status: "open" }, after: { status: "expired", eventId: event.id } });
+    return { paidPaymentId: null };
+  }
+
+  if (payment.status !== "open" && payment.status !== "expired") return { paidPaymentId: null };
+  const now = new Date();
+  const intent = typeof session.payment_intent === "string" ? session.payment_intent : (session.payment_intent?.id ?? session.id);
+  const reference = `card ${intent}`;
+  await tx.update(payments).set({ status: "paid", paidAt: now }).where(eq(payments.id, payment.id));
+  await writeAudit(tx, { actorUserId: null, showId: payment.showId, action: "payment.paid", subjectType: "payment", subjectId: payment.id, before: { status: payment.status }, after: { status: "paid", eventId: event.id, reference } });
+
+  const itemEntryIds = (await tx.selectDistinct({ entryId: paymentItems.entryId }).from(paymentItems).where(eq(paymentItems.paymentId, payment.id))).map((r) => r.entryId);
+  if (itemEntryIds.length) {
+    const marked = await tx
+      .update(entries)
+      .set({ status: "paid", paidAt: now, paymentReference: reference, updatedAt: now })
+      .where(and(inArray(entries.id, itemEntryIds), eq(entries.status, "submitted"), isNull(entries.paidAt)))
+      .returning({ id: entries.id });
+    for (const e of marked) {
+      await writeAudit(tx, { actorUserId: null, showId: payment.showId, action: "entry.paid", subjectType: "entry", subjectId: e.id, before: { status: "submitted" }, after: { status: "paid", reference, paymentId: payment.id } });
+    }
+  }
+  return { paidPaymentId: payment.id };
+}
+
+/** Where a checkout stands, for the banner on return from the payment page (own payments only). */
+export async function paymentStatusForEntrant(viewer: Viewer, paymentId: string) {
+  if (!/^[0-9a-f-]{36}$/i.test(paymentId)) return null;
+  const [row] = await db
+    .select({ id: payments.id, status: payments.status, amountCents: payments.amountCents, currency: payments.currency })
+    .from(payments)
+    .where(and(eq(payments.id, paymentId), eq(payments.entrantUserId, viewer.id)))
+    .limit(1);
+  return row ?? null;
+}
+
+const WITHDRAWABLE = new Set(["submitted", "paid", "accepted"]);
+
+/** The refund a withdrawal would give now: the show's percent of the entry fee charged by card. */
+async function refundFor(reader: Pick<Tx, "select">, entryId: string, refundPercent: number) {
+  const lines = await reader
+    .select({ paymentId: payments.id, amountCents: paymentItems.amountCents, description: paymentItems.description })
+    .from(paymentItems)
+    .innerJoin(payments, eq(payments.id, paymentItems.paymentId))
+    .where(and(eq(paymentItems.entryId, entryId), inArray(payments.status, ["paid", "partially_refunded"])));
+  const entryFee = lines.find((l) => feeKindOf(l.description) === "entry");
+  if (!entryFee) return null;
+  return { paymentId: entryFee.paymentId, refundCents: withdrawalRefundCents(entryFee.amountCents, refundPercent) };
+}
+
+export type Withdrawal = { entryNumber: number | null; refundCents: number; currency: string; message: string };
+
+/**
+ * The entrant withdraws one of their entries before entries close. The entry keeps its number
+ * (numbers are never reused). When it was paid by card, the refund due is recorded on the
+ * payment; the provider call is not made yet, so the show returns the money itself.
+ */
+export async function withdrawEntry(viewer: Viewer, entryId: string, now = new Date()): Promise<Withdrawal> {
+  return db.transaction(async (tx) => {
+    const [entry] = await tx
+      .select({ id: entries.id, showId: entries.showId, status: entries.status, entryNumber: entries.entryNumber, paymentReference: entries.paymentReference, paidAt: entries.paidAt, closesAt: shows.entryClosesAt, timeZone: shows.timeZone })
+      .from(entries)
+      .innerJoin(shows, eq(shows.id, entries.showId))
+      .where(and(eq(entries.id, entryId), eq(entries.entrantUserId, viewer.id)))
+      .for("update", { of: entries });
+    if (!entry) throw notFound("That entry was not found among yours.");
+    if (entry.status === "withdrawn") throw conflict("This entry is already withdrawn.");
+    if (!WITHDRAWABLE.has(entry.status)) {
+      throw conflict(entry.status === "draft" ? "This entry has not been sent yet; there is nothing to withdraw." : `This entry is ${entry.status}; please contact the show to take it out.`);
+    }
+    if (entry.closesAt && now.getTime() >= entry.closesAt.getTime()) {
+      throw conflict(`Entries closed on ${formatDateTime(entry.closesAt, entry.timeZone)}, so withdrawals can no longer be made here. Please contact the show.`);
+    }
+    const settings = await settingsForShowId(entry.showId, tx);
+    await expireOpenPaymentsFor(tx, viewer.id, [entry.id]);
+
+    let refundCents = 0;
+    if (entry.paymentReference.startsWith("card ")) {
+      const refund = await refundFor(tx, entry.id, settings.withdrawalRefundPercent);
+      if (refund && refund.refundCents > 0) {
+        refundCents = refund.refundCents;
+        const [p] = await tx.select({ amountCents: payments.amountCents, refundedCents: payments.refundedCents, status: payments.status }).from(payments).where(eq(payments.id, refund.paymentId)).for("update");
+        const refunded = Math.min(p!.amountCents, p!.refundedCents + refundCents);
+        const status = refunded >= p!.amountCents ? "refunded" : "partially_refunded";
+        await tx.update(payments).set({ refundedCents: refunded, status }).where(eq(payments.id, refund.paymentId));
+        await writeAudit(tx, { actorUserId: viewer.id, showId: entry.showId, action: "payment.refund_due", subjectType: "payment", subjectId: refund.paymentId, before: { refundedCents: p!.refundedCents, status: p!.status }, after: { refundedCents: refunded, status, entryId: entry.id } });
+      }
+    }
+    await tx.update(entries).set({ status: "withdrawn", withdrawnAt: now, updatedAt: now }).where(eq(entries.id, entry.id));
+    await writeAudit(tx, { actorUserId: viewer.id, showId: entry.showId, action: "entry.withdrawn", subjectType: "entry", subjectId: entry.id, before: { status: entry.status }, after: { status: "withdrawn", refundCents } });
+
+    const label = entry.entryNumber === null ? "The entry" : `Entry ${entry.entryNumber}`;
+    const message =
+      refundCents > 0
+        ? `${label} is withdrawn. A refund of ${formatMoney(refundCents, settings.currency)} will be returned by the show.`
+        : entry.paidAt && !entry.paymentReference.startsWith("card ")
+          ? `${label} is withdrawn. Please ask the show about any refund of what you paid in person.`
+          : `${label} is withdrawn.`;
+    return { entryNumber: entry.entryNumber, refundCents, currency: settings.currency, message };
+  });
+}
+
+export { refundFor as refundIfWithdrawn, entryFeesPaidCents, memberAt, scheduleOf };

@@ -1,9 +1,22 @@
 // A show's settings: the effective values (row or schema defaults) with the current rules
 // version, the public page's view of them, and the chair's audited changes.
 import "server-only";
-import { desc, eq } from "drizzle-orm";
-import { db } from "@/db/client";
-import { showRulesVersions, showSettings } from "@/db/schema";
+import { and, count, desc, eq, ne } from "drizzle-orm";
+import { db, type Tx } from "@/db/client";
+import { entries, showRulesVersions, showSettings, shows, user } from "@/db/schema";
+import { writeAudit } from "@/db/queries/audit";
+import { utcToZonedInput, zonedInputToUtc } from "@/components/format/zoned-time";
+import { badInput, conflict } from "@/lib/errors";
+import {
+  DATE_FIELDS,
+  STATUS_MOVES,
+  type DateField,
+  type DatesInput,
+  type PublishRulesInput,
+  type SettingsSectionInput,
+  type StatusChangeInput,
+} from "@/lib/schemas/settings";
+import { requireShowRole, type Viewer } from "@/lib/session";
 
 /** What a show without a settings row uses; mirrors the column defaults in db/schema/settings.ts. */
 export const DEFAULT_SETTINGS = {
@@ -92,4 +105,216 @@ export async function settingsForShowId(showId: string, reader: Reader = db): Pr
   if (!row) return { ...DEFAULT_SETTINGS, requiredPhotoViews: [...DEFAULT_SETTINGS.requiredPhotoViews], techniques: [...DEFAULT_SETTINGS.techniques], showId, saved: false, updatedAt: null, currentRules };
   const { updatedAt, ...values } = row;
   return { ...values, showId, saved: true, updatedAt, currentRules };
+}
+
+// ── Reading ─────────────────────────────────────────────────────────────────────────────────────
+
+const showColumns = {
+  id: shows.id,
+  slug: shows.slug,
+  name: shows.name,
+  guildName: shows.guildName,
+  venueName: shows.venueName,
+  venueAddress: shows.venueAddress,
+  timeZone: shows.timeZone,
+  status: shows.status,
+  entryOpensAt: shows.entryOpensAt,
+  entryClosesAt: shows.entryClosesAt,
+  dropOffStartsAt: shows.dropOffStartsAt,
+  dropOffEndsAt: shows.dropOffEndsAt,
+  judgingStartsAt: shows.judgingStartsAt,
+  judgingEndsAt: shows.judgingEndsAt,
+  showOpensAt: shows.showOpensAt,
+  showClosesAt: shows.showClosesAt,
+  pickUpStartsAt: shows.pickUpStartsAt,
+  pickUpEndsAt: shows.pickUpEndsAt,
+};
+
+/**
+ * What the public show page shows about a show past its draft: the show, its fees, limits,
+ * photo rules and the current rules and release text. Null for drafts and unknown shows.
+ */
+export async function publicShowDetails(slug: string) {
+  const [show] = await db
+    .select(showColumns)
+    .from(shows)
+    .where(and(eq(shows.slug, slug), ne(shows.status, "draft")))
+    .limit(1);
+  if (!show) return null;
+  const s = await settingsForShowId(show.id);
+  return {
+    show,
+    fees: {
+      currency: s.currency,
+      entryFeeCents: s.entryFeeCents,
+      memberEntryFeeCents: s.memberEntryFeeCents,
+      lateFeeCents: s.lateFeeCents,
+      lateFeeFromAt: s.lateFeeFromAt,
+      critiqueFeeCents: s.critiqueFeeCents,
+      feeCapCents: s.feeCapCents,
+      withdrawalRefundPercent: s.withdrawalRefundPercent,
+    },
+    limits: { maxEntriesPerEntrant: s.maxEntriesPerEntrant, maxEntriesPerCategory: s.maxEntriesPerCategory, capacity: s.capacity },
+    photos: {
+      requiredPhotoViews: s.requiredPhotoViews,
+      photoMinWidthPx: s.photoMinWidthPx,
+      photoMinHeightPx: s.photoMinHeightPx,
+      photoMaxBytes: s.photoMaxBytes,
+      statementWordLimit: s.statementWordLimit,
+      techniques: s.techniques,
+    },
+    juried: s.juried,
+    currentRules: s.currentRules,
+  };
+}
+export type PublicShowDetails = NonNullable<Awaited<ReturnType<typeof publicShowDetails>>>;
+
+/** Everything the chair's settings page shows: the show's dates, its settings, every rules version. */
+export async function settingsForChair(viewer: Viewer, slug: string) {
+  const { showId } = await requireShowRole(viewer, slug, ["chair"]);
+  const [show] = await db.select(showColumns).from(shows).where(eq(shows.id, showId)).limit(1);
+  if (!show) throw new Error(`show ${showId} vanished after its role check`);
+  const [settings, rulesHistory, [entryTotal]] = await Promise.all([
+    settingsForShowId(showId),
+    db
+      .select({
+        id: showRulesVersions.id,
+        version: showRulesVersions.version,
+        rulesText: showRulesVersions.rulesText,
+        releaseText: showRulesVersions.releaseText,
+        publishedAt: showRulesVersions.publishedAt,
+        publishedByName: user.name,
+      })
+      .from(showRulesVersions)
+      .leftJoin(user, eq(user.id, showRulesVersions.publishedBy))
+      .where(eq(showRulesVersions.showId, showId))
+      .orderBy(desc(showRulesVersions.version)),
+    db.select({ n: count() }).from(entries).where(eq(entries.showId, showId)),
+  ]);
+  return { show, settings, rulesHistory, entryCount: entryTotal?.n ?? 0, allowedMoves: STATUS_MOVES[show.status] };
+}
+export type ChairSettings = Awaited<ReturnType<typeof settingsForChair>>;
+
+// ── Writing ─────────────────────────────────────────────────────────────────────────────────────
+
+const SHOW_DATE_FIELDS = Object.keys(DATE_FIELDS).filter((k) => k !== "lateFeeFromAt") as Exclude<DateField, "lateFeeFromAt">[];
+
+async function lockShow(tx: Tx, showId: string) {
+  const [show] = await tx.select(showColumns).from(shows).where(eq(shows.id, showId)).for("update");
+  if (!show) throw new Error(`show ${showId} vanished after its role check`);
+  return show;
+}
+
+const iso = (d: Date | null | undefined) => (d ? d.toISOString() : null);
+
+/** Dates arrive as wall-clock text in the show's zone and are stored as UTC instants. */
+export async function updateShowDates(viewer: Viewer, slug: string, input: DatesInput) {
+  const { showId } = await requireShowRole(viewer, slug, ["chair"]);
+  return db.transaction(async (tx) => {
+    const show = await lockShow(tx, showId);
+    const current = await settingsForShowId(showId, tx);
+    const next: Record<DateField, Date | null> = {} as never;
+    for (const field of Object.keys(DATE_FIELDS) as DateField[]) {
+      const value = input[field];
+      next[field] = value ? zonedInputToUtc(value, show.timeZone) : null;
+      if (value && !next[field]) throw badInput("Some fields need attention.", { [field]: [`${DATE_FIELDS[field]}: that is not a real date and time.`] });
+    }
+    if (show.status === "entries_open" && !next.entryClosesAt) {
+      throw badInput("Entries are open, so they need a closing date.", { entryClosesAt: ["Entries close: a show taking entries needs a closing date."] });
+    }
+    const before = Object.fromEntries([...SHOW_DATE_FIELDS.map((f) => [f, iso(show[f])]), ["lateFeeFromAt", iso(current.lateFeeFromAt)]]);
+    const after = Object.fromEntries(Object.entries(next).map(([k, v]) => [k, iso(v)]));
+    const { lateFeeFromAt, ...showDates } = next;
+    await tx.update(shows).set({ ...showDates, updatedAt: new Date() }).where(eq(shows.id, showId));
+    await tx
+      .insert(showSettings)
+      .values({ showId, lateFeeFromAt })
+      .onConflictDoUpdate({ target: showSettings.showId, set: { lateFeeFromAt, updatedAt: new Date() } });
+    await writeAudit(tx, { actorUserId: viewer.id, showId, action: "show.dates_updated", subjectType: "show", subjectId: showId, before, after });
+    return { after: Object.fromEntries(Object.entries(next).map(([k, v]) => [k, utcToZonedInput(v, show.timeZone)])) };
+  });
+}
+
+const SECTION_LABELS: Record<SettingsSectionInput["section"], string> = {
+  fees: "Fees",
+  limits: "Limits",
+  photos: "Photos and statement",
+  options: "Judging, names and mail",
+};
+
+/** Saves one section (fees, limits, photos, options); the other sections' columns are not touched. */
+export async function updateShowSettings(viewer: Viewer, slug: string, input: SettingsSectionInput) {
+  const { showId } = await requireShowRole(viewer, slug, ["chair"]);
+  const { section, ...values } = input;
+  return db.transaction(async (tx) => {
+    // Lock the show so two saves of the first settings row can't race each other.
+    await lockShow(tx, showId);
+    const current = await settingsForShowId(showId, tx);
+    const before = Object.fromEntries(Object.keys(values).map((k) => [k, current[k as keyof typeof values]]));
+    await tx
+      .insert(showSettings)
+      .values({ showId, ...values })
+      .onConflictDoUpdate({ target: showSettings.showId, set: { ...values, updatedAt: new Date() } });
+    await writeAudit(tx, { actorUserId: viewer.id, showId, action: `settings.${section}_updated`, subjectType: "show_settings", subjectId: showId, before, after: values });
+    return { section, label: SECTION_LABELS[section] };
+  });
+}
+
+/** Publishes rules and release text as the next version; earlier versions are never changed. */
+export async function publishRules(viewer: Viewer, slug: string, input: PublishRulesInput) {
+  const { showId } = await requireShowRole(viewer, slug, ["chair"]);
+  return db.transaction(async (tx) => {
+    // The show's row lock serialises version numbers between two chairs publishing at once.
+    await lockShow(tx, showId);
+    const previous = await currentRulesFor(tx, showId);
+    const version = (previous?.version ?? 0) + 1;
+    const [row] = await tx
+      .insert(showRulesVersions)
+      .values({ showId, version, rulesText: input.rulesText, releaseText: input.releaseText, publishedBy: viewer.id })
+      .returning({ id: showRulesVersions.id, version: showRulesVersions.version, publishedAt: showRulesVersions.publishedAt });
+    if (!row) throw new Error("insert returned no row");
+    await writeAudit(tx, {
+      actorUserId: viewer.id,
+      showId,
+      action: "rules.published",
+      subjectType: "show_rules_version",
+      subjectId: row.id,
+      before: previous ? { id: previous.id, version: previous.version } : null,
+      after: { id: row.id, version, rulesText: input.rulesText, releaseText: input.releaseText },
+    });
+    return row;
+  });
+}
+
+export const STATUS_WORDS: Record<string, string> = {
+  draft: "being set up",
+  entries_open: "taking entries",
+  entries_closed: "entries closed",
+  judging: "judging",
+  results_published: "results out",
+  archived: "finished",
+};
+
+/** Moves the show to its next stage when the move makes sense; otherwise says why not (409). */
+export async function changeShowStatus(viewer: Viewer, slug: string, input: StatusChangeInput, now: Date = new Date()) {
+  const { showId } = await requireShowRole(viewer, slug, ["chair"]);
+  return db.transaction(async (tx) => {
+    const show = await lockShow(tx, showId);
+    const from = show.status;
+    const to = input.status;
+    const reasons: string[] = [];
+    if (from === to) reasons.push(`The show is already ${STATUS_WORDS[to]}.`);
+    else if (!STATUS_MOVES[from].includes(to)) {
+      const allowed = STATUS_MOVES[from].map((s) => `“${STATUS_WORDS[s]}”`).join(" or ");
+      reasons.push(`A show ${STATUS_WORDS[from]} can't move to “${STATUS_WORDS[to]}”${allowed ? `; it can move to ${allowed}` : ""}.`);
+    } else if (to === "entries_open") {
+      if (!show.entryClosesAt) reasons.push("Set the date entries close first (Dates).");
+      else if (show.entryClosesAt <= now) reasons.push("The closing date for entries has passed; move it later first (Dates).");
+      if (!(await currentRulesFor(tx, showId))) reasons.push("Publish the rules and release first (Rules and release).");
+    }
+    if (reasons.length) throw conflict(reasons.join(" "), { status: reasons });
+    await tx.update(shows).set({ status: to, updatedAt: now }).where(eq(shows.id, showId));
+    await writeAudit(tx, { actorUserId: viewer.id, showId, action: "show.status_changed", subjectType: "show", subjectId: showId, before: { status: from }, after: { status: to } });
+    return { from, to };
+  });
 }

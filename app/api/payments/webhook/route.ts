@@ -1,5 +1,7 @@
-// Receives the payments provider's webhook: verifies the signature over the raw body, then records the event.
-import { recordPaymentEvent } from "@/db/queries/payments";
+// Receives the payments provider's webhook: verifies the signature over the raw body, records the
+// event once, applies it in the same transaction, and mails the receipt after the commit.
+import { applyPaymentEvent, recordPaymentEvent } from "@/db/queries/payments";
+import { sendPaymentReceiptMail } from "@/lib/entry-mails";
 import { verifyWebhook, WebhookSignatureError } from "@/lib/payments";
 
 // The Stripe SDK's signature check uses node:crypto.
@@ -17,6 +19,15 @@ export async function POST(req: Request): Promise<Response> {
     }
     throw err;
   }
-  const { duplicate } = await recordPaymentEvent(event);
+  const applied: { paidPaymentId: string | null } = { paidPaymentId: null };
+  const { duplicate } = await recordPaymentEvent(event, async (tx, ev) => {
+    applied.paidPaymentId = (await applyPaymentEvent(tx, ev)).paidPaymentId;
+  });
+  const { paidPaymentId } = applied;
+  if (paidPaymentId) {
+    // The payment is committed either way; a failed mail must not make the provider redeliver
+    // (the redelivery would be a duplicate and send nothing), so log it for the show to follow up.
+    await sendPaymentReceiptMail(paidPaymentId).catch((err: unknown) => console.error("[webhook] receipt mail failed", { paidPaymentId, err }));
+  }
   return Response.json({ received: true, duplicate });
 }
