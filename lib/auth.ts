@@ -24,6 +24,12 @@ export const auth = betterAuth({
   trustedOrigins: trustedOrigins(),
   database: drizzleAdapter(db, { provider: "pg", schema }),
   telemetry: { enabled: false },
+  session: {
+    // A signed copy of the session in a cookie spares a database lookup on every request. The
+    // price: a session revoked elsewhere (password reset, sign-out on another device) still
+    // reads as valid here for up to a minute.
+    cookieCache: { enabled: true, maxAge: 60 },
+  },
   emailAndPassword: {
     enabled: true,
     requireEmailVerification: true,

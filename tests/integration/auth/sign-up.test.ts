@@ -7,9 +7,10 @@ import { env } from "@/lib/env";
 import { unique } from "../../helpers/factories";
 import { waitForMail } from "../../helpers/mailbox";
 
-// A documentation-range address (RFC 5737) in a header only, so this file's rate-limit bucket is
-// its own; nothing is sent to it.
-const ipFor = (n: number) => `198.51.100.${n}`;
+// Documentation-range addresses (RFC 3849, 2001:db8::/32) in a header only, so each test has a
+// rate-limit bucket of its own, new on every run; nothing is sent to them.
+const run = Math.floor(Math.random() * 0xffff).toString(16);
+const ipFor = (n: number) => `2001:db8:${run}:${n.toString(16)}::1`;
 
 async function call(pathAndQuery: string, init: { body?: unknown; ip: string; cookie?: string; method?: string }) {
   const headers = new Headers({ origin: env.APP_URL, "x-forwarded-for": init.ip });
