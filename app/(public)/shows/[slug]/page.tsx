@@ -1,11 +1,15 @@
-// A show's public page: who runs it, where, the dates of each stage, and how to enter a quilt.
+// A show's public page: who runs it, where, the dates of each stage, what entering costs and asks
+// for, the current rules and release, and how to enter a quilt.
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
-import { MapPin, Users } from "lucide-react";
-import { formatDateRange } from "@/components/format/dates";
+import { ClipboardCheck, MapPin, PackageOpen, Users } from "lucide-react";
+import { formatDateRange, formatDateTime } from "@/components/format/dates";
 import { EnterCallout } from "@/components/shows/enter-callout";
 import { ShowDateList } from "@/components/shows/show-dates";
-import { publicShowFor } from "@/components/shows/public-show";
+import { formatCents } from "@/components/shows/money";
+import { publicShowDetailsFor, publicShowFor } from "@/components/shows/public-show";
+import { ShowRules } from "@/components/shows/show-rules";
+import { FeeList, LimitList, PhotoRules } from "@/components/shows/show-terms";
 import { ShowStatusBadge } from "@/components/shows/show-status";
 import { currentViewer } from "@/components/shell/viewer";
 import { Card, CardHeader } from "@/components/ui/card";
@@ -25,8 +29,14 @@ export async function generateMetadata({ params }: Props): Promise<Metadata> {
 
 export default async function PublicShowPage({ params }: Props) {
   const { slug } = await params;
-  const [show, viewer] = await Promise.all([publicShowFor(slug), currentViewer()]);
-  if (!show) notFound();
+  const [details, viewer] = await Promise.all([publicShowDetailsFor(slug), currentViewer()]);
+  if (!details) notFound();
+  const { show, fees } = details;
+  const lateFrom = formatDateTime(fees.lateFeeFromAt, show.timeZone);
+  const lateFeeNote =
+    fees.lateFeeCents > 0 && lateFrom ? `A late fee of ${formatCents(fees.lateFeeCents, fees.currency)} per quilt applies from ${lateFrom}.` : null;
+  const dropOff = formatDateRange(show.dropOffStartsAt, show.dropOffEndsAt, show.timeZone, { withTime: true });
+  const pickUp = formatDateRange(show.pickUpStartsAt, show.pickUpEndsAt, show.timeZone, { withTime: true });
 
   return (
     <div className="space-y-8">
@@ -55,9 +65,38 @@ export default async function PublicShowPage({ params }: Props) {
               <Users aria-hidden className="mt-0.5 size-5 shrink-0 text-plum-500" />
               Run by {show.guildName}.
             </p>
+            <dl className="mt-4 space-y-3 border-t border-line pt-4">
+              <div>
+                <dt className="flex items-center gap-2 font-semibold">
+                  <ClipboardCheck aria-hidden className="size-5 text-plum-500" /> Bring your quilt
+                </dt>
+                <dd className={dropOff ? "pl-7" : "pl-7 text-ink-muted italic"}>{dropOff ?? "Drop-off times to be announced"}</dd>
+              </div>
+              <div>
+                <dt className="flex items-center gap-2 font-semibold">
+                  <PackageOpen aria-hidden className="size-5 text-plum-500" /> Collect your quilt
+                </dt>
+                <dd className={pickUp ? "pl-7" : "pl-7 text-ink-muted italic"}>{pickUp ?? "Pick-up times to be announced"}</dd>
+              </div>
+            </dl>
+          </Card>
+          <Card aria-labelledby="entering">
+            <CardHeader id="entering" title="Entering" />
+            <div className="space-y-6">
+              <FeeList fees={fees} timeZone={show.timeZone} />
+              <LimitList limits={details.limits} />
+              <PhotoRules photos={details.photos} juried={details.juried} />
+            </div>
+          </Card>
+          <Card aria-labelledby="rules">
+            <CardHeader id="rules" title="Rules and release" />
+            <ShowRules rules={details.currentRules} timeZone={show.timeZone} />
           </Card>
         </div>
-        <EnterCallout show={show} signedIn={Boolean(viewer)} />
+        {/* First on phones, so the way in is never below the rules; beside the content on wide screens. */}
+        <div className="order-first lg:order-none">
+          <EnterCallout show={show} signedIn={Boolean(viewer)} lateFeeNote={lateFeeNote} />
+        </div>
       </div>
     </div>
   );

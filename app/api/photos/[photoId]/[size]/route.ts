@@ -1,0 +1,22 @@
+// GET: one entry photo's bytes, to the entrant who owns it and the show's team only. Photos live
+// in a private bucket; no public URL ever leaves the server.
+import { photoForViewer } from "@/db/queries/entries";
+import { defineRoute } from "@/lib/api";
+import { notFound } from "@/lib/errors";
+import { PHOTO_SIZES, type PhotoSize } from "@/lib/schemas/entry";
+import { getObjectBytes } from "@/storage/s3";
+
+export const GET = defineRoute<{ photoId: string; size: string }>({ access: "user" }, async ({ viewer, params }) => {
+  if (!PHOTO_SIZES.includes(params.size as PhotoSize)) throw notFound("There is no such photo size.");
+  const photo = await photoForViewer(viewer!, params.photoId, params.size as PhotoSize);
+  const bytes = await getObjectBytes(photo.key);
+  return new Response(new Uint8Array(bytes), {
+    headers: {
+      "content-type": photo.contentType,
+      "content-length": String(bytes.length),
+      // Keys are never reused, but access can be taken away: keep it in this browser only, briefly.
+      "cache-control": "private, max-age=300",
+      "x-content-type-options": "nosniff",
+    },
+  });
+});

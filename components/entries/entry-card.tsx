@@ -1,0 +1,115 @@
+"use client";
+// One quilt on "My entries": number, status in plain words, what is still missing, and a
+// Withdraw button with a confirm step that says what refund it would give.
+import Link from "next/link";
+import { useState, useTransition } from "react";
+import { CircleSlash } from "lucide-react";
+import { withdrawEntryAction } from "@/app/(entrant)/my/actions";
+import { EntryStatusBadge, entryStatusInfo } from "@/components/entries/entry-status";
+import { Alert } from "@/components/ui/alert";
+import { Button } from "@/components/ui/button";
+import { formatMoney } from "@/scoring/fees";
+import { formatSize } from "@/scoring/units";
+
+export type EntryCardProps = {
+  entry: {
+    id: string;
+    entryNumber: number | null;
+    title: string;
+    widthUm: number;
+    lengthUm: number;
+    status: string;
+    decisionReason: string;
+    paid: boolean;
+    paidByCard: boolean;
+    canWithdraw: boolean;
+    refundIfWithdrawnCents: number;
+  };
+  currency: string;
+  refundPercent: number;
+};
+
+export function EntryCard({ entry: e, currency, refundPercent }: EntryCardProps) {
+  const info = entryStatusInfo(e.status);
+  return (
+    <li className="flex flex-col gap-2 rounded-card border border-line bg-surface p-5 shadow-card">
+      <div className="flex flex-wrap items-center justify-between gap-2">
+        <p className="text-sm font-semibold text-ink-muted">
+          {e.entryNumber === null ? (
+            "Number given when sent"
+          ) : (
+            <>
+              Entry <span className="font-display text-xl text-plum-700 tabular-nums">{e.entryNumber}</span>
+            </>
+          )}
+        </p>
+        <EntryStatusBadge status={e.status} />
+      </div>
+      <h3 className="text-xl">
+        <Link href={`/entries/${e.id}`} className="inline-flex min-h-tap items-center text-ink underline-offset-4 hover:underline">
+          {e.title}
+        </Link>
+      </h3>
+      <p className="text-ink-muted">{formatSize(e.widthUm, e.lengthUm)}</p>
+      <p className="border-t border-line pt-2 text-sm">{info.explain}</p>
+      {e.status === "declined" && e.decisionReason ? (
+        <p className="text-sm">
+          <span className="font-semibold">The committee’s reason:</span> {e.decisionReason}
+        </p>
+      ) : null}
+      {info.missing ? (
+        <p className="text-sm font-semibold text-warning-700">
+          Still to do: {info.missing}
+        </p>
+      ) : null}
+      {e.canWithdraw ? <WithdrawEntry entry={e} currency={currency} refundPercent={refundPercent} /> : null}
+    </li>
+  );
+}
+
+function refundNote(e: EntryCardProps["entry"], currency: string, refundPercent: number): string {
+  if (e.paidByCard) {
+    return e.refundIfWithdrawnCents > 0
+      ? `A refund of ${formatMoney(e.refundIfWithdrawnCents, currency)} (${refundPercent}% of the entry fee) will be returned by the show.`
+      : "This show gives no refund of the entry fee on withdrawal.";
+  }
+  if (e.paid) return "You paid in person: ask the show about any refund.";
+  return "Nothing was paid, so there is nothing to refund.";
+}
+
+function WithdrawEntry({ entry: e, currency, refundPercent }: EntryCardProps) {
+  const [confirming, setConfirming] = useState(false);
+  const [result, setResult] = useState<{ tone: "success" | "error"; message: string } | null>(null);
+  const [pending, startTransition] = useTransition();
+
+  const withdraw = () =>
+    startTransition(async () => {
+      const r = await withdrawEntryAction({ entryId: e.id });
+      setResult({ tone: r.ok ? "success" : "error", message: r.message ?? (r.ok ? "Withdrawn." : "The entry could not be withdrawn.") });
+      if (r.ok) setConfirming(false);
+    });
+
+  return (
+    <div className="space-y-2 border-t border-line pt-3">
+      {result ? <Alert live tone={result.tone} title={result.message} /> : null}
+      {confirming ? (
+        <div role="group" aria-label={`Withdraw ${e.title}?`} className="space-y-2 rounded-control border border-danger-700/30 bg-danger-50 p-3">
+          <p className="font-semibold">Withdraw this quilt from the show?</p>
+          <p className="text-sm">{refundNote(e, currency, refundPercent)} The entry number stays with this entry and is not given to anyone else. This cannot be undone here.</p>
+          <div className="flex flex-wrap gap-2">
+            <Button variant="danger" onClick={withdraw} pending={pending} pendingLabel="Withdrawing…">
+              Yes, withdraw
+            </Button>
+            <Button variant="ghost" onClick={() => setConfirming(false)} disabled={pending}>
+              Keep the entry
+            </Button>
+          </div>
+        </div>
+      ) : (
+        <Button variant="secondary" icon={<CircleSlash aria-hidden className="size-5" />} onClick={() => setConfirming(true)}>
+          Withdraw…
+        </Button>
+      )}
+    </div>
+  );
+}

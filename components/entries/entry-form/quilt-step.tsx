@@ -1,0 +1,37 @@
+"use client";
+// Step 1: the quilt's title, size and techniques.
+import { ActionForm } from "@/components/forms/action-form";
+import { CheckboxField, FieldError, TextField } from "@/components/ui/field";
+import { SizeField } from "@/components/entries/size-field";
+import { saveQuiltAction } from "@/app/(entrant)/entries/[id]/actions";
+import { quiltStepSchema, type QuiltStepInput } from "@/lib/schemas/entry";
+import { StepButtons } from "./step-buttons";
+import { useStepForm } from "./use-step-form";
+
+export function QuiltStep({ entryId, defaults, techniques, nextHref }: { entryId: string; defaults: QuiltStepInput; techniques: string[]; nextHref: string }) {
+  const { ctl, setIntent } = useStepForm({
+    schema: quiltStepSchema,
+    defaultValues: defaults,
+    action: (values) => saveQuiltAction(null, { ...values, entryId }),
+    nextHref,
+  });
+  const { register } = ctl.form;
+  const techError = ctl.errorOf("techniques");
+  return (
+    <ActionForm controller={ctl} aria-label="The quilt">
+      <TextField label="Title" autoComplete="off" maxLength={120} hint="As it should appear on the label." error={ctl.errorOf("title")} {...register("title")} />
+      <SizeField form={ctl.form} errorOf={ctl.errorOf} />
+      <fieldset aria-describedby={techError ? "techniques-error" : undefined}>
+        <legend className="mb-2 font-display text-xl font-semibold">Techniques</legend>
+        <p className="mb-2 text-sm text-ink-muted">Tick every one that applies.</p>
+        <div className="grid gap-x-4 sm:grid-cols-2">
+          {techniques.map((t) => (
+            <CheckboxField key={t} label={t[0]!.toUpperCase() + t.slice(1)} value={t} {...register("techniques")} />
+          ))}
+        </div>
+        <FieldError id="techniques-error" message={techError} />
+      </fieldset>
+      <StepButtons pending={ctl.pending} onIntent={setIntent} />
+    </ActionForm>
+  );
+}

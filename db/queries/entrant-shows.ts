@@ -1,0 +1,108 @@
+// "My entries": the signed-in entrant's entries grouped by show, with what each still needs,
+// what paying the unpaid ones would cost, and the refund a withdrawal would give.
+import "server-only";
+import { asc, desc, eq } from "drizzle-orm";
+import { db } from "@/db/client";
+import { entryFeesPaidCents, memberAt, scheduleOf } from "@/db/queries/payments";
+import { settingsForShowId } from "@/db/queries/settings";
+import { refundIfWithdrawn } from "@/db/queries/withdrawals";
+import { entries, shows } from "@/db/schema";
+import type { Viewer } from "@/lib/session";
+
+/** What the entrant sees: waiting list is its own state, and a decision shows only once released. */
+export function displayStatusOf(e: { status: string; waitlisted: boolean; paidAt: Date | null; decisionReleasedAt: Date | null }): string {
+  if (e.status === "submitted" && e.waitlisted) return "waitlisted";
+  if ((e.status === "accepted" || e.status === "declined") && !e.decisionReleasedAt) return e.paidAt ? "paid" : "submitted";
+  return e.status;
+}
+
+const WITHDRAWABLE = new Set(["submitted", "paid", "accepted"]);
+
+export async function myEntriesByShow(viewer: Viewer, now = new Date()) {
+  const rows = await db
+    .select({
+      id: entries.id,
+      entryNumber: entries.entryNumber,
+      title: entries.title,
+      widthUm: entries.widthUm,
+      lengthUm: entries.lengthUm,
+      status: entries.status,
+      waitlisted: entries.waitlisted,
+      decisionReason: entries.decisionReason,
+      decisionReleasedAt: entries.decisionReleasedAt,
+      paidAt: entries.paidAt,
+      paymentReference: entries.paymentReference,
+      critiqueRequested: entries.critiqueRequested,
+      showId: shows.id,
+      showSlug: shows.slug,
+      showName: shows.name,
+      guildName: shows.guildName,
+      timeZone: shows.timeZone,
+      venueName: shows.venueName,
+      venueAddress: shows.venueAddress,
+      entryClosesAt: shows.entryClosesAt,
+      dropOffStartsAt: shows.dropOffStartsAt,
+      dropOffEndsAt: shows.dropOffEndsAt,
+    })
+    .from(entries)
+    .innerJoin(shows, eq(shows.id, entries.showId))
+    .where(eq(entries.entrantUserId, viewer.id))
+    .orderBy(desc(shows.showOpensAt), asc(shows.name), asc(entries.entryNumber));
+
+  const byShow = new Map<string, typeof rows>();
+  for (const r of rows) byShow.set(r.showId, [...(byShow.get(r.showId) ?? []), r]);
+
+  return Promise.all(
+    [...byShow.values()].map(async (list) => {
+      const s = list[0]!;
+      const settings = await settingsForShowId(s.showId);
+      const withdrawOpen = !s.entryClosesAt || now.getTime() < s.entryClosesAt.getTime();
+      const shaped = await Promise.all(
+        list.map(async (e) => {
+          const paidByCard = e.paymentReference.startsWith("card ");
+          const refund = paidByCard ? await refundIfWithdrawn(db, e.id, settings.withdrawalRefundPercent) : null;
+          return {
+            id: e.id,
+            entryNumber: e.entryNumber,
+            title: e.title,
+            widthUm: e.widthUm,
+            lengthUm: e.lengthUm,
+            status: displayStatusOf(e),
+            decisionReason: e.status === "declined" && e.decisionReleasedAt ? e.decisionReason : "",
+            critiqueRequested: e.critiqueRequested,
+            paid: e.paidAt !== null,
+            paidByCard,
+            canPay: e.status === "submitted" && !e.waitlisted && e.paidAt === null,
+            canWithdraw: withdrawOpen && WITHDRAWABLE.has(e.status),
+            refundIfWithdrawnCents: refund?.refundCents ?? 0,
+          };
+        }),
+      );
+      return {
+        show: {
+          id: s.showId,
+          slug: s.showSlug,
+          name: s.showName,
+          guildName: s.guildName,
+          timeZone: s.timeZone,
+          venueName: s.venueName,
+          venueAddress: s.venueAddress,
+          entryClosesAt: s.entryClosesAt,
+          dropOffStartsAt: s.dropOffStartsAt,
+          dropOffEndsAt: s.dropOffEndsAt,
+        },
+        currency: settings.currency,
+        juried: settings.juried,
+        refundPercent: settings.withdrawalRefundPercent,
+        schedule: scheduleOf(settings),
+        member: await memberAt(db, viewer.id, s.guildName),
+        entryFeesAlreadyPaidCents: await entryFeesPaidCents(db, viewer.id, s.showId),
+        withdrawOpen,
+        entries: shaped,
+      };
+    }),
+  );
+}
+
+export type MyShow = Awaited<ReturnType<typeof myEntriesByShow>>[number];
+export type MyEntry = MyShow["entries"][number];

@@ -1,0 +1,109 @@
+// Entry fees in integer cents: the lines an entrant pays for the entries in one checkout (entry fee
+// at the member or non-member rate, late fee, critique fee), the per-entrant cap, and refunds.
+// Pure: the caller loads the show's settings and what was already paid, and saves the result.
+
+export type FeeSchedule = {
+  entryFeeCents: number;
+  memberEntryFeeCents: number;
+  lateFeeCents: number;
+  /** After this moment the late fee applies; null = never. */
+  lateFeeFromAt: Date | null;
+  critiqueFeeCents: number;
+  /** Most one entrant pays in entry fees at a show; late and critique fees come on top. null = no cap. */
+  feeCapCents: number | null;
+};
+
+export type FeeKind = "entry" | "late" | "critique";
+
+/** Stored as the start of each payment line's description, so a line's kind can be read back. */
+export const FEE_KIND_LABELS: Record<FeeKind, string> = {
+  entry: "Entry fee",
+  late: "Late fee",
+  critique: "Critique fee",
+};
+
+export type FeeEntry = { entryId: string; entryNumber: number | null; title: string; critiqueRequested: boolean };
+
+export type FeeLine = { entryId: string; kind: FeeKind; amountCents: number; description: string };
+
+export type FeeQuote = {
+  member: boolean;
+  late: boolean;
+  lines: FeeLine[];
+  /** Entry fees in this checkout after the cap. */
+  entryFeesCents: number;
+  /** What the cap took off the entry fees in this checkout. */
+  capSavingCents: number;
+  totalCents: number;
+};
+
+/**
+ * Membership rule: the entrant is a member when the guild named in their profile equals the
+ * show's guild name, ignoring case and surrounding spaces. An empty guild is never a member.
+ */
+export function isGuildMember(profileGuild: string | null | undefined, showGuildName: string): boolean {
+  const mine = (profileGuild ?? "").trim().toLowerCase();
+  return mine !== "" && mine === showGuildName.trim().toLowerCase();
+}
+
+/** The late fee applies strictly after `lateFeeFromAt`. */
+export function isLate(schedule: Pick<FeeSchedule, "lateFeeFromAt">, at: Date): boolean {
+  return schedule.lateFeeFromAt !== null && at.getTime() > schedule.lateFeeFromAt.getTime();
+}
+
+const lineName = (kind: FeeKind, e: FeeEntry) =>
+  `${FEE_KIND_LABELS[kind]} — ${e.entryNumber === null ? "entry" : `entry ${e.entryNumber}`}: ${e.title}`;
+
+/**
+ * The lines for the entries being paid now. The cap counts entry fees the entrant already paid
+ * at this show (`entryFeesAlreadyPaidCents`); entries are charged in the order given until the
+ * cap is reached, and later ones pay no entry fee. Zero-amount lines are left out.
+ */
+export function quoteFees(input: {
+  schedule: FeeSchedule;
+  member: boolean;
+  at: Date;
+  entries: FeeEntry[];
+  entryFeesAlreadyPaidCents: number;
+}): FeeQuote {
+  const { schedule, member, entries } = input;
+  const rate = member ? schedule.memberEntryFeeCents : schedule.entryFeeCents;
+  const late = isLate(schedule, input.at);
+  let capLeft = schedule.feeCapCents === null ? Infinity : Math.max(0, schedule.feeCapCents - input.entryFeesAlreadyPaidCents);
+  const lines: FeeLine[] = [];
+  let entryFeesCents = 0;
+  let capSavingCents = 0;
+  for (const e of entries) {
+    const entryFee = Math.min(rate, capLeft);
+    capLeft -= entryFee;
+    entryFeesCents += entryFee;
+    capSavingCents += rate - entryFee;
+    const push = (kind: FeeKind, amountCents: number) => {
+      if (amountCents > 0) lines.push({ entryId: e.entryId, kind, amountCents, description: lineName(kind, e) });
+    };
+    push("entry", entryFee);
+    if (late) push("late", schedule.lateFeeCents);
+    if (e.critiqueRequested) push("critique", schedule.critiqueFeeCents);
+  }
+  const totalCents = lines.reduce((sum, l) => sum + l.amountCents, 0);
+  return { member, late, lines, entryFeesCents, capSavingCents, totalCents };
+}
+
+/** The kind of a stored payment line, read back from its description (see FEE_KIND_LABELS). */
+export function feeKindOf(description: string): FeeKind | null {
+  for (const [kind, label] of Object.entries(FEE_KIND_LABELS) as [FeeKind, string][]) {
+    if (description.startsWith(label)) return kind;
+  }
+  return null;
+}
+
+/** Refund on withdrawal: the show's percent of the entry fee charged for that entry, rounded down to the cent. */
+export function withdrawalRefundCents(entryFeePaidCents: number, refundPercent: number): number {
+  const pct = Math.min(100, Math.max(0, refundPercent));
+  return Math.floor((entryFeePaidCents * pct) / 100);
+}
+
+/** "$25.00" — amounts are integer cents. */
+export function formatMoney(cents: number, currency = "usd"): string {
+  return new Intl.NumberFormat("en-US", { style: "currency", currency: currency.toUpperCase() }).format(cents / 100);
+}

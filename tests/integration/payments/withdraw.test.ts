@@ -1,0 +1,139 @@
+// Withdrawing an entry before entries close: status and time, the entry number kept, and the
+// refund due (the show's percent of the entry fee, rounded down) recorded on a card payment.
+import { eq } from "drizzle-orm";
+import { beforeAll, describe, expect, it } from "vitest";
+import { startCheckoutAction, withdrawEntryAction } from "@/app/(entrant)/my/actions";
+import { POST } from "@/app/api/payments/webhook/route";
+import { db } from "@/db/client";
+import { myEntriesByShow } from "@/db/queries/entrant-shows";
+import { auditLog, entries, payments, showSettings, shows } from "@/db/schema";
+import { env } from "@/lib/env";
+import { stripe } from "@/lib/payments";
+import { makeEntry, makeShow, makeUser, type TestUser } from "../../helpers/factories";
+import { actAs } from "../../helpers/request-context";
+
+const FAKE = `http://127.0.0.1:${env.STRIPE_API_PORT}`;
+
+/** Pays the entries by card through the fake and the webhook route; returns the payment id. */
+async function payByCard(user: TestUser, showSlug: string, entryIds: string[]): Promise<string> {
+  actAs(user.cookie);
+  const started = await startCheckoutAction(null, { showSlug, entryIds });
+  if (!started.ok) throw new Error(started.message);
+  const [p] = await db.select().from(payments).where(eq(payments.id, started.data!.paymentId));
+  const event = await (await fetch(`${FAKE}/_fake/sessions/${p!.checkoutSessionId}/complete`, { method: "POST" })).json();
+  const body = JSON.stringify(event);
+  const signature = stripe.webhooks.generateTestHeaderString({ payload: body, secret: env.STRIPE_WEBHOOK_SECRET });
+  const res = await POST(new Request("http://127.0.0.1:3100/api/payments/webhook", { method: "POST", headers: { "stripe-signature": signature }, body }));
+  expect(res.status).toBe(200);
+  return p!.id;
+}
+
+async function showWithFees(refundPercent: number) {
+  const show = await makeShow();
+  await db.insert(showSettings).values({ showId: show.id, entryFeeCents: 2500, critiqueFeeCents: 1000, withdrawalRefundPercent: refundPercent });
+  return show;
+}
+
+const entryRow = async (id: string) => (await db.select().from(entries).where(eq(entries.id, id)))[0]!;
+const paymentRow = async (id: string) => (await db.select().from(payments).where(eq(payments.id, id)))[0]!;
+
+let entrant: TestUser;
+beforeAll(async () => {
+  entrant = await makeUser({ name: "Ines Calloway" });
+});
+
+describe("withdrawEntryAction", () => {
+  it("withdraws a card-paid entry, keeps its number and records 50% of the entry fee as due: 2500 × 50% = 1250", async () => {
+    const show = await showWithFees(50);
+    const a = await makeEntry(show.id, entrant.id, { title: "Morning Glory" });
+    const b = await makeEntry(show.id, entrant.id, { title: "Night Sky", critiqueRequested: true });
+    const paymentId = await payByCard(entrant, show.slug, [a.id, b.id]); // 2500 + 2500 + 1000 = 6000
+
+    actAs(entrant.cookie);
+    const r = await withdrawEntryAction(null, { entryId: a.id });
+    expect(r).toMatchObject({ ok: true, message: `Entry ${a.entryNumber} is withdrawn. A refund of $12.50 will be returned by the show.` });
+    const after = await entryRow(a.id);
+    expect(after.status).toBe("withdrawn");
+    expect(after.withdrawnAt).toBeInstanceOf(Date);
+    expect(after.entryNumber).toBe(a.entryNumber);
+    expect(await paymentRow(paymentId)).toMatchObject({ amountCents: 6000, refundedCents: 1250, status: "partially_refunded" });
+
+    // The second entry: its entry fee only, never the critique fee: 1250 + 1250 = 2500 of 6000.
+    await withdrawEntryAction(null, { entryId: b.id });
+    expect(await paymentRow(paymentId)).toMatchObject({ refundedCents: 2500, status: "partially_refunded" });
+    const audit = await db.select({ action: auditLog.action }).from(auditLog).where(eq(auditLog.subjectId, paymentId));
+    expect(audit.filter((x) => x.action === "payment.refund_due")).toHaveLength(2);
+  });
+
+  it("marks the payment refunded when the whole amount is due back (100% of a lone 2500 entry fee)", async () => {
+    const show = await showWithFees(100);
+    const a = await makeEntry(show.id, entrant.id);
+    const paymentId = await payByCard(entrant, show.slug, [a.id]);
+    actAs(entrant.cookie);
+    expect(await withdrawEntryAction(null, { entryId: a.id })).toMatchObject({ ok: true, message: expect.stringContaining("$25.00") });
+    expect(await paymentRow(paymentId)).toMatchObject({ refundedCents: 2500, status: "refunded" });
+  });
+
+  it("rounds the refund down to the cent: 1999 × 33% = 659.67 → 659", async () => {
+    const show = await makeShow();
+    await db.insert(showSettings).values({ showId: show.id, entryFeeCents: 1999, withdrawalRefundPercent: 33 });
+    const a = await makeEntry(show.id, entrant.id);
+    const paymentId = await payByCard(entrant, show.slug, [a.id]);
+    actAs(entrant.cookie);
+    expect(await withdrawEntryAction(null, { entryId: a.id })).toMatchObject({ ok: true, message: expect.stringContaining("$6.59") });
+    expect((await paymentRow(paymentId)).refundedCents).toBe(659);
+  });
+
+  it("withdraws an unpaid entry with no refund, and refuses a second withdrawal", async () => {
+    const show = await showWithFees(50);
+    const a = await makeEntry(show.id, entrant.id);
+    actAs(entrant.cookie);
+    expect(await withdrawEntryAction(null, { entryId: a.id })).toMatchObject({ ok: true, message: `Entry ${a.entryNumber} is withdrawn.` });
+    expect(await withdrawEntryAction(null, { entryId: a.id })).toMatchObject({ ok: false, status: 409, message: "This entry is already withdrawn." });
+  });
+
+  it("refuses after entries close, with the closing time in the show's zone, and changes nothing", async () => {
+    const show = await showWithFees(50);
+    await db.update(shows).set({ entryClosesAt: new Date("2026-03-01T06:00:00Z") }).where(eq(shows.id, show.id));
+    const a = await makeEntry(show.id, entrant.id);
+    actAs(entrant.cookie);
+    const r = await withdrawEntryAction(null, { entryId: a.id });
+    // 06:00 UTC is midnight in America/Chicago (CST, UTC−6) on 1 March 2026.
+    expect(r).toMatchObject({ ok: false, status: 409, message: "Entries closed on Sun, Mar 1, 2026, 12:00 AM CST, so withdrawals can no longer be made here. Please contact the show." });
+    expect((await entryRow(a.id)).status).toBe("submitted");
+  });
+
+  it("answers 404 for someone else's entry and 400 for a malformed id", async () => {
+    const show = await showWithFees(50);
+    const other = await makeUser();
+    const theirs = await makeEntry(show.id, other.id);
+    actAs(entrant.cookie);
+    expect(await withdrawEntryAction(null, { entryId: theirs.id })).toMatchObject({ ok: false, status: 404 });
+    expect((await entryRow(theirs.id)).status).toBe("submitted");
+    expect(await withdrawEntryAction(null, { entryId: "nope" })).toMatchObject({ ok: false, status: 400, fieldErrors: { entryId: [expect.any(String)] } });
+  });
+});
+
+describe("My entries: what each entry shows", () => {
+  it("gives the refund a withdrawal would give, the waiting list, and decisions only once released", async () => {
+    const person = await makeUser();
+    const show = await showWithFees(50);
+    const paid = await makeEntry(show.id, person.id, { title: "Paid By Card" });
+    await payByCard(person, show.slug, [paid.id]);
+    const waiting = await makeEntry(show.id, person.id, { waitlisted: true });
+    const unreleased = await makeEntry(show.id, person.id, { status: "accepted", paidAt: new Date(), paymentReference: "cash" });
+    const declined = await makeEntry(show.id, person.id, { status: "declined", decisionReason: "Over the size limit.", decisionReleasedAt: new Date() });
+    const unpaid = await makeEntry(show.id, person.id);
+
+    const [group] = await myEntriesByShow({ id: person.id, name: person.name, email: person.email, isAdmin: false, roles: [] });
+    expect(group!.show.id).toBe(show.id);
+    expect(group!.refundPercent).toBe(50);
+    const byId = new Map(group!.entries.map((e) => [e.id, e]));
+    expect(byId.get(paid.id)).toMatchObject({ status: "paid", paidByCard: true, refundIfWithdrawnCents: 1250, canWithdraw: true, canPay: false });
+    expect(byId.get(waiting.id)).toMatchObject({ status: "waitlisted", canPay: false });
+    expect(byId.get(unreleased.id)).toMatchObject({ status: "paid", paidByCard: false, refundIfWithdrawnCents: 0 });
+    expect(byId.get(declined.id)).toMatchObject({ status: "declined", decisionReason: "Over the size limit.", canWithdraw: false });
+    expect(byId.get(unpaid.id)).toMatchObject({ status: "submitted", canPay: true });
+    expect(group!.entryFeesAlreadyPaidCents).toBe(2500);
+  });
+});
