@@ -70,7 +70,7 @@ export function EntryCard({ entry: e, currency, refundPercent }: EntryCardProps)
 function refundNote(e: EntryCardProps["entry"], currency: string, refundPercent: number): string {
   if (e.paidByCard) {
     return e.refundIfWithdrawnCents > 0
-      ? `A refund of ${formatMoney(e.refundIfWithdrawnCents, currency)} (${refundPercent}% of the entry fee) will be returned by the show.`
+      ? `A refund of ${formatMoney(e.refundIfWithdrawnCents, currency)} (${refundPercent}% of the entry fee) goes back to your card.`
       : "This show gives no refund of the entry fee on withdrawal.";
   }
   if (e.paid) return "You paid in person: ask the show about any refund.";

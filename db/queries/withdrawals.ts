@@ -1,5 +1,5 @@
 // Withdrawing an entry before entries close, and the refund it gives: the show's percent of the
-// entry fee charged by card, recorded on the payment for the show to return.
+// entry fee charged by card, refunded through the payments provider and recorded on the payment.
 import "server-only";
 import { and, eq, inArray } from "drizzle-orm";
 import { db, type Tx } from "@/db/client";
@@ -9,6 +9,7 @@ import { settingsForShowId } from "@/db/queries/settings";
 import { entries, paymentItems, payments, shows } from "@/db/schema";
 import { formatDateTime } from "@/components/format/dates";
 import { conflict, notFound } from "@/lib/errors";
+import { stripe } from "@/lib/payments";
 import type { Viewer } from "@/lib/session";
 import { feeKindOf, formatMoney, withdrawalRefundCents } from "@/scoring/fees";
 
@@ -30,8 +31,9 @@ export type Withdrawal = { entryNumber: number | null; refundCents: number; curr
 
 /**
  * The entrant withdraws one of their entries before entries close. The entry keeps its number
- * (numbers are never reused). When it was paid by card, the refund due is recorded on the
- * payment; the provider call is not made yet, so the show returns the money itself.
+ * (numbers are never reused). When it was paid by card, the show's share is refunded through the
+ * provider inside the transaction: if the provider refuses, nothing is withdrawn. The idempotency
+ * key is the entry's id, so a retry after a lost answer never refunds twice.
  */
 export async function withdrawEntry(viewer: Viewer, entryId: string, now = new Date()): Promise<Withdrawal> {
   return db.transaction(async (tx) => {
@@ -58,10 +60,20 @@ export async function withdrawEntry(viewer: Viewer, entryId: string, now = new D
       if (refund && refund.refundCents > 0) {
         refundCents = refund.refundCents;
         const [p] = await tx.select({ amountCents: payments.amountCents, refundedCents: payments.refundedCents, status: payments.status }).from(payments).where(eq(payments.id, refund.paymentId)).for("update");
+        const paymentIntent = entry.paymentReference.slice("card ".length);
+        try {
+          await stripe.refunds.create(
+            { payment_intent: paymentIntent, amount: refundCents, metadata: { entryId: entry.id, reason: "withdrawn" } },
+            { idempotencyKey: `withdraw-${entry.id}` },
+          );
+        } catch (err) {
+          console.error("[withdraw] refund failed", err);
+          throw conflict("The refund could not be made just now, so the entry is not withdrawn yet. Please try again in a few minutes.");
+        }
         const refunded = Math.min(p!.amountCents, p!.refundedCents + refundCents);
         const status = refunded >= p!.amountCents ? "refunded" : "partially_refunded";
         await tx.update(payments).set({ refundedCents: refunded, status }).where(eq(payments.id, refund.paymentId));
-        await writeAudit(tx, { actorUserId: viewer.id, showId: entry.showId, action: "payment.refund_due", subjectType: "payment", subjectId: refund.paymentId, before: { refundedCents: p!.refundedCents, status: p!.status }, after: { refundedCents: refunded, status, entryId: entry.id } });
+        await writeAudit(tx, { actorUserId: viewer.id, showId: entry.showId, action: "payment.refunded", subjectType: "payment", subjectId: refund.paymentId, before: { refundedCents: p!.refundedCents, status: p!.status }, after: { refundedCents: refunded, status, entryId: entry.id } });
       }
     }
     await tx.update(entries).set({ status: "withdrawn", withdrawnAt: now, updatedAt: now }).where(eq(entries.id, entry.id));
@@ -70,7 +82,7 @@ export async function withdrawEntry(viewer: Viewer, entryId: string, now = new D
     const label = entry.entryNumber === null ? "The entry" : `Entry ${entry.entryNumber}`;
     const message =
       refundCents > 0
-        ? `${label} is withdrawn. A refund of ${formatMoney(refundCents, settings.currency)} will be returned by the show.`
+        ? `${label} is withdrawn. A refund of ${formatMoney(refundCents, settings.currency)} is on its way to your card.`
         : entry.paidAt && !entry.paymentReference.startsWith("card ")
           ? `${label} is withdrawn. Please ask the show about any refund of what you paid in person.`
           : `${label} is withdrawn.`;

@@ -5,6 +5,7 @@
 //   POST /v1/checkout/sessions                (mode "payment", line_items with price_data only)
 //   GET  /v1/checkout/sessions/:id
 //   POST /v1/checkout/sessions/:id/expire
+//   POST /v1/refunds                          (payment_intent + amount, against a paid session)
 //   Bearer (or Basic) secret-key auth, Stripe-shaped errors, Request-Id, Idempotency-Key replay.
 //   A hosted test checkout page (GET/POST /pay/:id, GET /pay/:id/cancel) and signed webhook events
 //   checkout.session.completed / checkout.session.expired, retried with bounded backoff.
@@ -109,6 +110,8 @@ export async function startPaymentsFake(opts: PaymentsFakeOptions): Promise<Paym
   const lineItems = new Map<string, LineItem[]>();
   const events = new Map<string, StoredEvent>();
   const idempotent = new Map<string, { fingerprint: string; status: number; body: string }>();
+  const refundedByIntent = new Map<string, number>();
+  const refunds: Json[] = [];
   const timers = new Set<NodeJS.Timeout>();
   let stopped = false;
   let baseUrl = "";
@@ -281,6 +284,7 @@ export async function startPaymentsFake(opts: PaymentsFakeOptions): Promise<Paym
     }
 
     if (method === "GET" && path === "/_fake/health") return sendJson(res, 200, { ok: true });
+    if (method === "GET" && path === "/_fake/refunds") return sendJson(res, 200, { data: refunds });
     if (method === "GET" && path === "/_fake/events") {
       const type = url.searchParams.get("type");
       const list = [...events.values()].reverse().filter((e) => !type || e.event.type === type);
@@ -339,7 +343,36 @@ export async function startPaymentsFake(opts: PaymentsFakeOptions): Promise<Paym
       void deliver(stored);
       return [200, stored.event.data.object];
     }
-    throw new ApiError(404, "invalid_request_error", `Unrecognized request URL (${method}: ${path}). The payments fake covers only Checkout Sessions.`);
+    if (method === "POST" && path === "/v1/refunds") return [200, createRefund(parseForm(body))];
+    throw new ApiError(404, "invalid_request_error", `Unrecognized request URL (${method}: ${path}). The payments fake covers only Checkout Sessions and refunds.`);
+  }
+
+  // A refund of part or all of a paid session's payment intent; never more than was paid.
+  function createRefund(form: Record<string, unknown>): Json {
+    const intent = typeof form.payment_intent === "string" ? form.payment_intent : "";
+    const session = [...sessions.values()].find((x) => x.payment_intent === intent && x.payment_status === "paid");
+    if (!session) throw new ApiError(404, "invalid_request_error", `No such payment_intent: '${intent}'`, { code: "resource_missing", param: "payment_intent" });
+    const already = refundedByIntent.get(intent) ?? 0;
+    const left = session.amount_total - already;
+    const amount = form.amount === undefined ? left : Number(form.amount);
+    if (!Number.isInteger(amount) || amount <= 0) throw new ApiError(400, "invalid_request_error", "Invalid positive integer", { param: "amount" });
+    if (amount > left) {
+      throw new ApiError(400, "invalid_request_error", `Refund amount (${amount}) is greater than the unrefunded amount on the charge (${left}).`, { code: "amount_too_large", param: "amount" });
+    }
+    refundedByIntent.set(intent, already + amount);
+    info(`refunded ${amount} of ${intent}`);
+    const refund = {
+      id: newId("re_test"),
+      object: "refund",
+      amount,
+      currency: session.currency,
+      payment_intent: intent,
+      status: "succeeded",
+      created: nowSec(),
+      metadata: (form.metadata as Json) ?? {},
+    };
+    refunds.push(refund);
+    return refund;
   }
 
   const server = http.createServer((req, res) => {

@@ -1,5 +1,6 @@
 // Withdrawing an entry before entries close: status and time, the entry number kept, and the
-// refund due (the show's percent of the entry fee, rounded down) recorded on a card payment.
+// refund (the show's percent of the entry fee, rounded down) made through the payments fake and
+// recorded on the card payment.
 import { eq } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
 import { startCheckoutAction, withdrawEntryAction } from "@/app/(entrant)/my/actions";
@@ -51,7 +52,7 @@ describe("withdrawEntryAction", () => {
 
     actAs(entrant.cookie);
     const r = await withdrawEntryAction(null, { entryId: a.id });
-    expect(r).toMatchObject({ ok: true, message: `Entry ${a.entryNumber} is withdrawn. A refund of $12.50 will be returned by the show.` });
+    expect(r).toMatchObject({ ok: true, message: `Entry ${a.entryNumber} is withdrawn. A refund of $12.50 is on its way to your card.` });
     const after = await entryRow(a.id);
     expect(after.status).toBe("withdrawn");
     expect(after.withdrawnAt).toBeInstanceOf(Date);
@@ -62,7 +63,11 @@ describe("withdrawEntryAction", () => {
     await withdrawEntryAction(null, { entryId: b.id });
     expect(await paymentRow(paymentId)).toMatchObject({ refundedCents: 2500, status: "partially_refunded" });
     const audit = await db.select({ action: auditLog.action }).from(auditLog).where(eq(auditLog.subjectId, paymentId));
-    expect(audit.filter((x) => x.action === "payment.refund_due")).toHaveLength(2);
+    expect(audit.filter((x) => x.action === "payment.refunded")).toHaveLength(2);
+    // The provider really refunded both shares, once each (idempotency key per entry).
+    const { data: refunds } = (await (await fetch(`${FAKE}/_fake/refunds`)).json()) as { data: { amount: number; metadata: { entryId?: string } }[] };
+    const mine = refunds.filter((x) => x.metadata.entryId === a.id || x.metadata.entryId === b.id);
+    expect(mine.map((x) => x.amount)).toEqual([1250, 1250]);
   });
 
   it("marks the payment refunded when the whole amount is due back (100% of a lone 2500 entry fee)", async () => {
