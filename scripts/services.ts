@@ -53,6 +53,12 @@ export async function startServices(opts: ServicesOptions): Promise<Services> {
   const quiet = opts.quiet ?? false;
   const s3Dir = path.join(opts.dataDir, "s3");
   const mailDir = path.join(opts.dataDir, "mail");
+  // Check every port before touching the data folders: emptying them under a running
+  // instance of the same profile would pull its bucket out from under it.
+  await ensurePortFree(ports.s3, "S3 fake (s3rver)");
+  await ensurePortFree(ports.smtp, "mail catcher (SMTP)");
+  await ensurePortFree(ports.mailWeb, "mail catcher (web)");
+  await ensurePortFree(ports.payments, "payments fake");
   if (opts.fresh ?? opts.profile !== "start") {
     await fs.rm(s3Dir, { recursive: true, force: true });
     await fs.rm(mailDir, { recursive: true, force: true });

@@ -9,6 +9,9 @@ import { DEMO_SHOW, expectNoSidewaysScroll, linkFromMail, MAIL_WEB_URL, shootAll
 test("an entrant registers a quilt with two photos, pays, and gets the receipt", async ({ page }) => {
   test.setTimeout(180_000);
   const email = `quilter-${Date.now()}@example.test`;
+  page.on("console", (m) => {
+    if (m.type() === "error") console.log(`[browser] ${m.text()}`);
+  });
   await page.setViewportSize(VIEWPORTS.phone);
 
   // A new account, confirmed from the e-mail.

@@ -49,6 +49,10 @@ export const actions: Record<string, Case> = {
     expect: only({ chair: 200 }),
     input: async (w) => ({ showSlug: w.show.slug, email: `${unique("s")}@example.test`, role: "scribe" }),
   },
+  "(chair)/shows/[slug]/manage#sendDropOffRemindersAction": {
+    expect: only({ chair: 200 }),
+    input: async (w) => ({ showSlug: w.show.slug }),
+  },
   "(chair)/shows/[slug]/manage#removeMemberAction": {
     expect: only({ chair: 200 }),
     input: async (w) => {

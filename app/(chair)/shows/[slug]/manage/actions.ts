@@ -2,6 +2,7 @@
 // The chair's team actions: invite a judge, scribe or intake volunteer; remove a member.
 import { revalidatePath } from "next/cache";
 import { z } from "zod";
+import { sendDropOffReminders } from "@/db/queries/reminders";
 import { inviteToTeam, removeFromTeam } from "@/db/queries/team";
 import { defineAction } from "@/lib/action";
 import { sendInvitationMail } from "@/lib/invitation-mail";
@@ -25,4 +26,14 @@ export const removeMemberAction = defineAction(removeRoleSchema.extend({ showSlu
   await removeFromTeam(viewer, input.showSlug, input.roleId);
   revalidatePath(`/shows/${input.showSlug}/manage`);
   return { message: "Removed from the team." };
+});
+
+export const sendDropOffRemindersAction = defineAction(z.object({ showSlug }), async (input, viewer) => {
+  const { sent, failed } = await sendDropOffReminders(viewer, input.showSlug);
+  if (sent === 0 && failed === 0) return { message: "No entrant has a quilt expected at drop-off yet, so no reminder was sent." };
+  return {
+    message: failed
+      ? `Reminders sent to ${sent} entrants; ${failed} could not be sent (see the server log) — try again later.`
+      : `Drop-off reminders sent to ${sent} ${sent === 1 ? "entrant" : "entrants"}.`,
+  };
 });

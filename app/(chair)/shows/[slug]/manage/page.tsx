@@ -6,6 +6,7 @@ import { EntryCounts } from "@/components/shows/entry-counts";
 import { ShowDateList } from "@/components/shows/show-dates";
 import { ShowStatusBadge } from "@/components/shows/show-status";
 import { InviteForm } from "@/components/team/invite-form";
+import { RemindersForm } from "@/components/chair/reminders-form";
 import { PendingInvitations, TeamMembers } from "@/components/team/team-list";
 import { Alert } from "@/components/ui/alert";
 import { ButtonLink } from "@/components/ui/button";
@@ -54,6 +55,11 @@ export default async function ManageShowPage({ params }: Props) {
           <ShowDateList show={show} compact />
         </Card>
       </div>
+
+      <Card aria-labelledby="reminders">
+        <CardHeader id="reminders" title="Drop-off reminders" />
+        <RemindersForm showSlug={show.slug} />
+      </Card>
 
       <Card aria-labelledby="team">
         <CardHeader id="team" title="Show team" description="Judges, scribes and intake volunteers see only their own areas of this show." />
