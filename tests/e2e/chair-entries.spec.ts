@@ -7,7 +7,7 @@ test("the chair filters, accepts an entry, reads its history and downloads the s
   await page.setViewportSize(VIEWPORTS.desktop);
   await signIn(page, "chair@ribbonry.test");
   await page.goto(`/shows/${DEMO_SHOW}/manage/entries`);
-  await page.getByLabel("Status").selectOption("submitted");
+  await page.getByRole("combobox", { name: "Status" }).selectOption("submitted");
   const firstChoice = page.getByRole("checkbox", { name: /^Choose No\. \d+/ }).first();
   await expect(firstChoice).toBeVisible();
   const label = (await firstChoice.getAttribute("aria-label"))!;
@@ -18,8 +18,8 @@ test("the chair filters, accepts an entry, reads its history and downloads the s
   await expect(page.getByText("The entrants have been e-mailed.")).toBeVisible();
 
   // The entry's own page shows the decision in its history.
-  await page.getByLabel("Status").selectOption("");
-  await page.getByLabel("Search").fill(number);
+  await page.getByRole("combobox", { name: "Status" }).selectOption("");
+  await page.getByRole("searchbox", { name: "Search" }).or(page.getByRole("textbox", { name: "Search" })).first().fill(number);
   const row = page.getByRole("row").filter({ has: page.getByRole("checkbox", { name: label }) });
   await row.locator(`a[href*="/manage/entries/"]`).first().click();
   await expect(page.getByRole("heading", { level: 1 })).toBeVisible();
