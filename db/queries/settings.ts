@@ -1,6 +1,7 @@
 // A show's settings: the effective values (row or schema defaults) with the current rules
 // version, the public page's view of them, and the chair's audited changes.
 import "server-only";
+import { showDateColumns } from "@/db/queries/shows";
 import { and, count, desc, eq, ne } from "drizzle-orm";
 import { db, type Tx } from "@/db/client";
 import { entries, showRulesVersions, showSettings, shows, user } from "@/db/schema";
@@ -118,16 +119,7 @@ const showColumns = {
   venueAddress: shows.venueAddress,
   timeZone: shows.timeZone,
   status: shows.status,
-  entryOpensAt: shows.entryOpensAt,
-  entryClosesAt: shows.entryClosesAt,
-  dropOffStartsAt: shows.dropOffStartsAt,
-  dropOffEndsAt: shows.dropOffEndsAt,
-  judgingStartsAt: shows.judgingStartsAt,
-  judgingEndsAt: shows.judgingEndsAt,
-  showOpensAt: shows.showOpensAt,
-  showClosesAt: shows.showClosesAt,
-  pickUpStartsAt: shows.pickUpStartsAt,
-  pickUpEndsAt: shows.pickUpEndsAt,
+  ...showDateColumns,
 };
 
 /**
