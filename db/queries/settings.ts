@@ -1,7 +1,7 @@
 // A show's settings: the effective values (row or schema defaults) with the current rules
 // version, the public page's view of them, and the chair's audited changes.
 import "server-only";
-import { showDateColumns } from "@/db/queries/shows";
+import { publicShowColumns } from "@/db/queries/shows";
 import { and, count, desc, eq, ne } from "drizzle-orm";
 import { db, type Tx } from "@/db/client";
 import { entries, showRulesVersions, showSettings, shows, user } from "@/db/schema";
@@ -110,17 +110,6 @@ export async function settingsForShowId(showId: string, reader: Reader = db): Pr
 
 // ── Reading ─────────────────────────────────────────────────────────────────────────────────────
 
-const showColumns = {
-  id: shows.id,
-  slug: shows.slug,
-  name: shows.name,
-  guildName: shows.guildName,
-  venueName: shows.venueName,
-  venueAddress: shows.venueAddress,
-  timeZone: shows.timeZone,
-  status: shows.status,
-  ...showDateColumns,
-};
 
 /**
  * What the public show page shows about a show past its draft: the show, its fees, limits,
@@ -128,7 +117,7 @@ const showColumns = {
  */
 export async function publicShowDetails(slug: string) {
   const [show] = await db
-    .select(showColumns)
+    .select(publicShowColumns)
     .from(shows)
     .where(and(eq(shows.slug, slug), ne(shows.status, "draft")))
     .limit(1);
@@ -164,7 +153,7 @@ export type PublicShowDetails = NonNullable<Awaited<ReturnType<typeof publicShow
 /** Everything the chair's settings page shows: the show's dates, its settings, every rules version. */
 export async function settingsForChair(viewer: Viewer, slug: string) {
   const { showId } = await requireShowRole(viewer, slug, ["chair"]);
-  const [show] = await db.select(showColumns).from(shows).where(eq(shows.id, showId)).limit(1);
+  const [show] = await db.select(publicShowColumns).from(shows).where(eq(shows.id, showId)).limit(1);
   if (!show) throw new Error(`show ${showId} vanished after its role check`);
   const [settings, rulesHistory, [entryTotal]] = await Promise.all([
     settingsForShowId(showId),
@@ -192,7 +181,7 @@ export type ChairSettings = Awaited<ReturnType<typeof settingsForChair>>;
 const SHOW_DATE_FIELDS = Object.keys(DATE_FIELDS).filter((k) => k !== "lateFeeFromAt") as Exclude<DateField, "lateFeeFromAt">[];
 
 async function lockShow(tx: Tx, showId: string) {
-  const [show] = await tx.select(showColumns).from(shows).where(eq(shows.id, showId)).for("update");
+  const [show] = await tx.select(publicShowColumns).from(shows).where(eq(shows.id, showId)).for("update");
   if (!show) throw new Error(`show ${showId} vanished after its role check`);
   return show;
 }

@@ -23,7 +23,8 @@ export const showDateColumns = {
   pickUpEndsAt: shows.pickUpEndsAt,
 };
 
-const publicColumns = {
+/** The columns of a show anyone may see. */
+export const publicShowColumns = {
   id: shows.id,
   slug: shows.slug,
   name: shows.name,
@@ -40,7 +41,7 @@ export type PublicShow = Awaited<ReturnType<typeof publicShowBySlug>> & {};
 /** Shows anyone may see: everything past its draft. */
 export async function listPublicShows() {
   return db
-    .select(publicColumns)
+    .select(publicShowColumns)
     .from(shows)
     .where(ne(shows.status, "draft"))
     .orderBy(asc(shows.showOpensAt), asc(shows.name));
@@ -48,7 +49,7 @@ export async function listPublicShows() {
 
 export async function publicShowBySlug(slug: string) {
   const [show] = await db
-    .select(publicColumns)
+    .select(publicShowColumns)
     .from(shows)
     .where(and(eq(shows.slug, slug), ne(shows.status, "draft")))
     .limit(1);
@@ -58,7 +59,7 @@ export async function publicShowBySlug(slug: string) {
 /** Every show with its chairs and entry count, for the platform administrator. */
 export async function showsForAdmin(viewer: Viewer) {
   requireAdmin(viewer);
-  const rows = await db.select(publicColumns).from(shows).orderBy(asc(shows.name));
+  const rows = await db.select(publicShowColumns).from(shows).orderBy(asc(shows.name));
   const chairs = await db
     .select({ showId: showRoles.showId, name: user.name, email: user.email })
     .from(showRoles)
