@@ -8,6 +8,7 @@ import { db, type Tx } from "@/db/client";
 import { entries, entryPhotos, showEntryCounters, shows, type Entry } from "@/db/schema";
 import { writeAudit } from "@/db/queries/audit";
 import { settingsForShowId, type EffectiveSettings } from "@/db/queries/settings";
+import { categoriesLocked, decideEntryTx, placeOnSubmission } from "@/db/queries/categories";
 import { entryWindow } from "@/components/shows/entry-window";
 import { formatDateTime } from "@/components/format/dates";
 import { badInput, conflict, forbiddenError, notFound } from "@/lib/errors";
@@ -195,8 +196,10 @@ export async function saveEntryStep(viewer: Viewer, entryId: string, { step, inp
   await db.transaction(async (tx) => {
     const a = await entryAccess(viewer, entryId, tx, true);
     assertEditable(a);
-    await tx.update(entries).set({ ...changes, updatedAt: new Date() }).where(eq(entries.id, entryId));
+    const [saved] = await tx.update(entries).set({ ...changes, updatedAt: new Date() }).where(eq(entries.id, entryId)).returning();
     await writeAudit(tx, { actorUserId: viewer.id, showId: a.show.id, action: `entry.${step}_saved`, subjectType: "entry", subjectId: entryId, after: changes });
+    // A sent entry is placed again whenever what the rules read changes (size, techniques, makers…).
+    if (saved && saved.status !== "draft" && !categoriesLocked(a.show.status)) await decideEntryTx(tx, saved, viewer.id, `${step} step saved`);
   });
 }
 
@@ -277,12 +280,17 @@ export async function submitEntry(viewer: Viewer, entryId: string, input: Submit
       waitlisted = (taken?.n ?? 0) >= settings.capacity;
     }
 
+    // The category, the entrant's per-category limit and the category's cap.
+    const placed = await placeOnSubmission(tx, a.entry, { maxEntriesPerCategory: settings.maxEntriesPerCategory, toleranceUm: settings.sizeToleranceUm });
+    const waitlistReason = waitlisted ? `${a.show.name} is full (${settings.capacity} entries).` : placed.waitlistReason;
+    waitlisted = waitlisted || placed.waitlistReason !== "";
+
     const entryNumber = (counter?.lastNumber ?? 100) + 1;
     const now = new Date();
     await tx.update(showEntryCounters).set({ lastNumber: entryNumber }).where(eq(showEntryCounters.showId, a.show.id));
     await tx
       .update(entries)
-      .set({ entryNumber, status: "submitted", submittedAt: now, waitlisted, rulesVersionId: rules?.id ?? null, rulesAcceptedAt: now, updatedAt: now })
+      .set({ ...placed.columns, entryNumber, status: "submitted", submittedAt: now, waitlisted, waitlistReason, rulesVersionId: rules?.id ?? null, rulesAcceptedAt: now, updatedAt: now })
       .where(eq(entries.id, entryId));
     await writeAudit(tx, {
       actorUserId: viewer.id,
@@ -291,7 +299,7 @@ export async function submitEntry(viewer: Viewer, entryId: string, input: Submit
       subjectType: "entry",
       subjectId: entryId,
       before: { status: "draft" },
-      after: { status: "submitted", entryNumber, waitlisted, rulesVersionId: rules?.id ?? null },
+      after: { status: "submitted", entryNumber, waitlisted, waitlistReason, rulesVersionId: rules?.id ?? null, categoryState: placed.placement.outcome.state, categoryId: placed.columns.categoryId, categoryReasons: placed.placement.reasons },
     });
     return { entryNumber, waitlisted };
   });

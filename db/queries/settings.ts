@@ -6,6 +6,7 @@ import { and, count, desc, eq, ne } from "drizzle-orm";
 import { db, type Tx } from "@/db/client";
 import { entries, showRulesVersions, showSettings, shows, user } from "@/db/schema";
 import { writeAudit } from "@/db/queries/audit";
+import { judgingBlockers } from "@/db/queries/categories";
 import { utcToZonedInput, zonedInputToUtc } from "@/components/format/zoned-time";
 import { badInput, conflict } from "@/lib/errors";
 import {
@@ -41,6 +42,9 @@ export const DEFAULT_SETTINGS = {
   juried: false,
   publishNames: true,
   replyToEmail: "",
+  categoryOverlap: "flag" as "flag" | "firstByPrecedence",
+  /** 1 in (25,400 µm): within 1 in of the registered size, a common show rule. */
+  sizeToleranceUm: 25_400,
 };
 
 export type CurrentRules = { id: string; version: number; rulesText: string; releaseText: string; publishedAt: Date };
@@ -74,6 +78,8 @@ const settingsColumns = {
   juried: showSettings.juried,
   publishNames: showSettings.publishNames,
   replyToEmail: showSettings.replyToEmail,
+  categoryOverlap: showSettings.categoryOverlap,
+  sizeToleranceUm: showSettings.sizeToleranceUm,
   updatedAt: showSettings.updatedAt,
 };
 
@@ -104,8 +110,9 @@ export async function settingsForShowId(showId: string, reader: Reader = db): Pr
   const [row] = await reader.select(settingsColumns).from(showSettings).where(eq(showSettings.showId, showId)).limit(1);
   const currentRules = await currentRulesFor(reader, showId);
   if (!row) return { ...DEFAULT_SETTINGS, requiredPhotoViews: [...DEFAULT_SETTINGS.requiredPhotoViews], techniques: [...DEFAULT_SETTINGS.techniques], showId, saved: false, updatedAt: null, currentRules };
-  const { updatedAt, ...values } = row;
-  return { ...values, showId, saved: true, updatedAt, currentRules };
+  const { updatedAt, categoryOverlap, ...values } = row;
+  const overlap = categoryOverlap === "firstByPrecedence" ? "firstByPrecedence" : "flag";
+  return { ...values, categoryOverlap: overlap, showId, saved: true, updatedAt, currentRules };
 }
 
 // ── Reading ─────────────────────────────────────────────────────────────────────────────────────
@@ -180,7 +187,7 @@ export type ChairSettings = Awaited<ReturnType<typeof settingsForChair>>;
 
 const SHOW_DATE_FIELDS = Object.keys(DATE_FIELDS).filter((k) => k !== "lateFeeFromAt") as Exclude<DateField, "lateFeeFromAt">[];
 
-async function lockShow(tx: Tx, showId: string) {
+export async function lockShow(tx: Tx, showId: string) {
   const [show] = await tx.select(publicShowColumns).from(shows).where(eq(shows.id, showId)).for("update");
   if (!show) throw new Error(`show ${showId} vanished after its role check`);
   return show;
@@ -292,6 +299,8 @@ export async function changeShowStatus(viewer: Viewer, slug: string, input: Stat
       if (!show.entryClosesAt) reasons.push("Set the date entries close first (Dates).");
       else if (show.entryClosesAt <= now) reasons.push("The closing date for entries has passed; move it later first (Dates).");
       if (!(await currentRulesFor(tx, showId))) reasons.push("Publish the rules and release first (Rules and release).");
+    } else if (to === "judging") {
+      reasons.push(...(await judgingBlockers(tx, showId)));
     }
     if (reasons.length) throw conflict(reasons.join(" "), { status: reasons });
     await tx.update(shows).set({ status: to, updatedAt: now }).where(eq(shows.id, showId));

@@ -15,6 +15,7 @@ import {
 } from "drizzle-orm/pg-core";
 import { sql } from "drizzle-orm";
 import { user } from "./auth";
+import { categories } from "./categories";
 import { shows } from "./shows";
 
 export const entryStatus = pgEnum("entry_status", [
@@ -29,6 +30,12 @@ export const entryStatus = pgEnum("entry_status", [
   "returned",
   "withdrawn",
 ]);
+
+/**
+ * How the entry's category was settled: not yet (a draft, or a show with no categories), by the
+ * rules (one category), the rules found none or several (the chair's queue), or the chair chose.
+ */
+export const categoryState = pgEnum("category_state", ["undecided", "decided", "fits_none", "fits_several", "overridden"]);
 
 export const quiltingMethod = pgEnum("quilting_method", ["hand", "home_machine", "frame_machine"]);
 export const division = pgEnum("division", ["open", "youth", "first_time"]);
@@ -79,6 +86,24 @@ export const entries = pgTable(
     withdrawnAt: timestamp({ withTimezone: true }),
     judged: boolean().notNull().default(true),
     division: division().notNull().default("open"),
+    categoryId: uuid().references(() => categories.id, { onDelete: "set null" }),
+    categoryState: categoryState().notNull().default("undecided"),
+    /** The decision's reasons in plain words, as shown to the entrant and the chair. */
+    categoryReasons: text().array().notNull().default(sql`'{}'::text[]`),
+    /** For "fits several": the categories it fits. */
+    categoryCandidateIds: uuid().array().notNull().default(sql`'{}'::uuid[]`),
+    categoryOverrideReason: text().notNull().default(""),
+    categoryDecidedAt: timestamp({ withTimezone: true }),
+    /** Why the entry waits, e.g. "Category 10 is full (cap 20)". */
+    waitlistReason: text().notNull().default(""),
+    /** Re-measured at intake (µm), by whom and when. */
+    measuredWidthUm: integer(),
+    measuredLengthUm: integer(),
+    measuredAt: timestamp({ withTimezone: true }),
+    measuredBy: text().references(() => user.id, { onDelete: "set null" }),
+    /** Set when the measured size is off the registered one by more than the show's tolerance. */
+    sizeFlag: text().notNull().default(""),
+    sizeFlagReviewedAt: timestamp({ withTimezone: true }),
     status: entryStatus().notNull().default("draft"),
     createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
@@ -86,6 +111,8 @@ export const entries = pgTable(
   (t) => [
     uniqueIndex("entries_show_number").on(t.showId, t.entryNumber),
     index("entries_entrant").on(t.entrantUserId),
+    index("entries_show_category").on(t.showId, t.categoryId),
+    check("entries_measured_positive", sql`(${t.measuredWidthUm} is null) = (${t.measuredLengthUm} is null) and coalesce(${t.measuredWidthUm}, 1) > 0 and coalesce(${t.measuredLengthUm}, 1) > 0`),
     check("entries_size_positive", sql`${t.widthUm} > 0 and ${t.lengthUm} > 0`),
     check("entries_value_nonnegative", sql`${t.declaredValueCents} >= 0`),
     check("entries_size_unit", sql`${t.sizeUnit} in ('in', 'cm')`),
@@ -118,6 +145,7 @@ export const entryPhotos = pgTable(
 export const entriesRelations = relations(entries, ({ one, many }) => ({
   show: one(shows, { fields: [entries.showId], references: [shows.id] }),
   entrant: one(user, { fields: [entries.entrantUserId], references: [user.id] }),
+  category: one(categories, { fields: [entries.categoryId], references: [categories.id] }),
   photos: many(entryPhotos),
 }));
 
@@ -127,4 +155,5 @@ export const entryPhotosRelations = relations(entryPhotos, ({ one }) => ({
 
 export type Entry = typeof entries.$inferSelect;
 export type NewEntry = typeof entries.$inferInsert;
+export type CategoryState = (typeof categoryState.enumValues)[number];
 export type EntryStatus = (typeof entryStatus.enumValues)[number];

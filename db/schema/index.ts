@@ -3,6 +3,7 @@ export * from "./auth";
 export * from "./shows";
 export * from "./settings";
 export * from "./people";
+export * from "./categories";
 export * from "./entries";
 export * from "./payments";
 export * from "./audit";

@@ -37,6 +37,10 @@ export const showSettings = pgTable("show_settings", {
   juried: boolean().notNull().default(false),
   publishNames: boolean().notNull().default(true),
   replyToEmail: text().notNull().default(""),
+  /** "flag": an entry fitting several categories goes to the chair; "firstByPrecedence": the first wins. */
+  categoryOverlap: text().notNull().default("flag"),
+  /** How far the size measured at intake may be off the registered size (µm; 25,400 = 1 in). */
+  sizeToleranceUm: integer().notNull().default(25_400),
   updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
 });
 

@@ -8,6 +8,8 @@ import type { PgDatabase } from "drizzle-orm/pg-core";
 import type { PostgresJsQueryResultHKT } from "drizzle-orm/postgres-js";
 import * as schema from "../schema";
 import { photoSizeFor, renderPatchwork, type PatchworkView } from "../../storage/patchwork";
+import { factsOf, placeEntry, prepareSet, type ShowCategory } from "../../scoring/category-sets";
+import { GUILD_STARTER } from "../../scoring/starter-sets";
 import { DEMO_PASSWORD, DEMO_RULES, DEMO_SETTINGS, demoScenario, type DemoQuilt, type DemoShowRole } from "./demo-data";
 
 /**
@@ -139,6 +141,23 @@ export async function seedDemo(opts: SeedDemoOptions): Promise<{ created: boolea
     createdAt: new Date(q.createdAt),
     updatedAt: new Date(q.updatedAt),
   }));
+  // The demo runs on the small guild starter set; each sent entry is placed as submission would.
+  const categoryIds = new Map(GUILD_STARTER.rules.map((r) => [r.id, randomUUID()] as const));
+  const categorySet: ShowCategory[] = GUILD_STARTER.rules.map((r) => ({ ...r, id: categoryIds.get(r.id)! }));
+  const categoryRows = categorySet.map((c) => ({ id: c.id, showId, code: c.code, name: c.name, description: c.description ?? "", precedence: c.precedence, conditions: c.conditions, createdAt: showCreatedAt, updatedAt: showCreatedAt }));
+  const prepared = prepareSet(categorySet, { overlap: GUILD_STARTER.overlap });
+  for (const row of entryRows) {
+    if (row.status === "draft") continue;
+    const placed = placeEntry(factsOf({ ...row, techniques: row.techniques ?? [], madeBy: row.madeBy ?? [], quiltedBy: row.quiltedBy ?? "", quiltedForHire: row.quiltedForHire ?? false, judged: row.judged ?? true, division: row.division ?? "open" }, 25_400), { state: "undecided" }, prepared);
+    const o = placed.outcome;
+    Object.assign(row, {
+      categoryState: o.state,
+      categoryId: o.state === "decided" ? o.categoryId : null,
+      categoryCandidateIds: o.state === "fits_several" ? o.candidateIds : [],
+      categoryReasons: placed.reasons,
+      categoryDecidedAt: row.submittedAt,
+    });
+  }
   const photoJobs = scenario.quilts.flatMap((q, i) =>
     q.status === "draft"
       ? [] // drafts have no photos yet
@@ -175,6 +194,7 @@ export async function seedDemo(opts: SeedDemoOptions): Promise<{ created: boolea
     await tx.insert(schema.showRulesVersions).values({ id: rulesVersionId, showId, version: 1, ...DEMO_RULES, publishedBy: chairId, publishedAt: showCreatedAt });
     const lastNumber = Math.max(100, ...entryRows.map((e) => e.entryNumber ?? 0));
     await tx.insert(schema.showEntryCounters).values({ showId, lastNumber });
+    await tx.insert(schema.categories).values(categoryRows);
     await tx.insert(schema.entries).values(entryRows);
     log(`rows written for ${users.length} people and ${entryRows.length} entries; rendering ${photoJobs.length} photos`);
 

@@ -3,7 +3,8 @@
 import { randomUUID } from "node:crypto";
 import { hashPassword } from "better-auth/crypto";
 import { db } from "@/db/client";
-import { account, entries, showRoles, shows, user, type ShowRole } from "@/db/schema";
+import { account, categories, entries, showRoles, shows, user, type ShowRole } from "@/db/schema";
+import type { Condition } from "@/scoring/categories";
 import { auth } from "@/lib/auth";
 import { inchesToUm } from "@/scoring/units";
 
@@ -81,6 +82,22 @@ export async function makeEntry(showId: string, entrantUserId: string, fields: P
       status: "submitted",
       madeBy: ["Test Maker"],
       ...fields,
+    })
+    .returning();
+  return row!;
+}
+
+/** A category of the show; by default one that takes every judged quilt ("All judged quilts"). */
+export async function makeCategory(showId: string, fields: { code?: string; name?: string; precedence?: number; conditions?: Condition[]; cap?: number | null } = {}) {
+  const [row] = await db
+    .insert(categories)
+    .values({
+      showId,
+      code: fields.code ?? unique("C").slice(0, 10),
+      name: fields.name ?? "All judged quilts",
+      precedence: fields.precedence ?? 10,
+      conditions: fields.conditions ?? [{ kind: "judged", value: true }],
+      cap: fields.cap ?? null,
     })
     .returning();
   return row!;

@@ -19,7 +19,7 @@ import { updateDatesAction, updateSettingsAction, publishRulesAction, changeStat
 import { GET as getSettingsRoute } from "@/app/api/shows/[slug]/settings/route";
 import { getViewer, type Viewer } from "@/lib/session";
 import { actAs } from "../../helpers/request-context";
-import { grantRole, makeShow, makeUser, type TestUser } from "../../helpers/factories";
+import { grantRole, makeCategory, makeShow, makeUser, type TestUser } from "../../helpers/factories";
 
 type Show = Awaited<ReturnType<typeof makeShow>>;
 let show: Show;
@@ -257,6 +257,9 @@ describe("show status", () => {
     expect(await changeStatusAction(null, { showSlug: show.slug, status: "entries_open" })).toMatchObject({ ok: false, status: 409, message: "The show is already taking entries." });
     const v = await viewerOf(chair);
     await changeShowStatus(v, show.slug, { status: "entries_closed" });
+    // Judging waits for categories (tests/integration/categories covers the queue).
+    await expect(changeShowStatus(v, show.slug, { status: "judging" })).rejects.toMatchObject({ status: 409, message: "Set up the categories first (Categories)." });
+    await makeCategory(show.id);
     await changeShowStatus(v, show.slug, { status: "judging" });
     await expect(changeShowStatus(v, show.slug, { status: "entries_open" })).rejects.toMatchObject({ status: 409 });
     const audits = await auditFor(show.id, "show.status_changed");

@@ -1,7 +1,7 @@
 // Access rows for the chair's show settings: the settings route and every settings action.
 // Writes run against a show of their own (the world's chair made its chair too), so moving
 // dates or the stage never changes the shared show other rows rely on.
-import { grantRole, makeShow } from "../../../helpers/factories";
+import { grantRole, makeCategory, makeShow } from "../../../helpers/factories";
 import { only, type Case, type World } from "../table";
 
 async function ownShow(w: World, status: "entries_open" | "entries_closed" = "entries_open") {
@@ -42,9 +42,13 @@ export const actions: Record<string, Case> = {
     expect: only({ chair: 200 }),
     input: async (w) => ({ showSlug: (await ownShow(w)).slug, rulesText: "Quilts must be finished and labelled.", releaseText: "I release the guild from liability." }),
   },
-  // entries closed → judging needs nothing more, so the chair's move succeeds.
+  // entries closed → judging needs categories (and no entry without one), so the chair's move succeeds.
   [`${base}#changeStatusAction`]: {
     expect: only({ chair: 200 }),
-    input: async (w) => ({ showSlug: (await ownShow(w, "entries_closed")).slug, status: "judging" }),
+    input: async (w) => {
+      const show = await ownShow(w, "entries_closed");
+      await makeCategory(show.id);
+      return { showSlug: show.slug, status: "judging" };
+    },
   },
 };
