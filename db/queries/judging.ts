@@ -1,11 +1,21 @@
-// What judges and scribes may see of a show's entries. Blind by construction: the select lists
-// only the quilt's own facts, never the entrant, maker or quilter (madeBy/quiltedBy are names).
+// What judges and scribes see and send. Blind by construction: every select here lists the quilt's
+// own facts only (the fields the show releases), never the entrant, maker or quilter, their
+// contact or guild. Sheet changes from tablets are merged by scoring/sheet-sync.ts.
 import "server-only";
-import { and, asc, eq, isNotNull, notInArray } from "drizzle-orm";
-import { db } from "@/db/client";
-import { entries } from "@/db/schema";
+import { and, asc, eq, inArray, isNotNull, notInArray } from "drizzle-orm";
+import { db, type Tx } from "@/db/client";
+import { categories, entries, entryPhotos, judgeSheets, judgingPanels, panelCategories, panelMembers, scoreChanges, scoreSheets, user } from "@/db/schema";
+import { writeAudit } from "@/db/queries/audit";
+import { settingsForShowId } from "@/db/queries/settings";
+import { JUDGED_OUT } from "@/db/queries/judging-setup";
+import { forbiddenError } from "@/lib/errors";
+import type { SyncBatch } from "@/lib/schemas/judging";
 import { AREA_ROLES, requireShowRole, type Viewer } from "@/lib/session";
+import { sheetTotal, validateMark, type Criterion, type Mark, type ScoreSheet } from "@/scoring/score-sheets";
+import { applyBatch, emptySheet, type ChangeOutcome, type Json, type SheetChange, type SheetState } from "@/scoring/sheet-sync";
+import { formatSize } from "@/scoring/units";
 
+/** The list page's view: entries to be judged at the show, by number. */
 export async function judgingQueue(viewer: Viewer, showSlug: string) {
   const show = await requireShowRole(viewer, showSlug, AREA_ROLES.judging);
   const rows = await db
@@ -20,17 +30,285 @@ export async function judgingQueue(viewer: Viewer, showSlug: string) {
       judged: entries.judged,
     })
     .from(entries)
-    .where(
-      and(
-        eq(entries.showId, show.showId),
-        isNotNull(entries.entryNumber),
-        eq(entries.judged, true),
-        notInArray(entries.status, ["draft", "declined", "withdrawn"]),
-      ),
-    )
+    .where(and(eq(entries.showId, show.showId), isNotNull(entries.entryNumber), eq(entries.judged, true), notInArray(entries.status, [...JUDGED_OUT])))
     .orderBy(asc(entries.entryNumber));
   return {
     show: { name: show.name, slug: show.slug },
     entries: rows.map((r) => ({ ...r, entryNumber: r.entryNumber! })),
   };
+}
+
+// ---- Who may score what ------------------------------------------------------------------------
+
+type Seat = { panelId: string; panelName: string; day: string; room: string; role: "judge" | "scribe" };
+
+/** The judges this viewer may score for, each with the categories they judge, via the viewer's panels. */
+async function scoringRights(reader: Pick<Tx, "select">, showId: string, viewerId: string) {
+  const seats: Seat[] = await reader
+    .select({ panelId: judgingPanels.id, panelName: judgingPanels.name, day: judgingPanels.day, room: judgingPanels.room, role: panelMembers.role })
+    .from(panelMembers)
+    .innerJoin(judgingPanels, eq(judgingPanels.id, panelMembers.panelId))
+    .where(and(eq(judgingPanels.showId, showId), eq(panelMembers.userId, viewerId)));
+  const panelIds = seats.map((s) => s.panelId);
+  if (!panelIds.length) return { seats, judges: new Map<string, { name: string; categoryIds: Set<string>; panelIds: Set<string> }>() };
+  const [judgeRows, catRows] = await Promise.all([
+    reader.select({ panelId: panelMembers.panelId, userId: panelMembers.userId, name: user.name }).from(panelMembers).innerJoin(user, eq(user.id, panelMembers.userId)).where(and(inArray(panelMembers.panelId, panelIds), eq(panelMembers.role, "judge"))),
+    reader.select({ panelId: panelCategories.panelId, categoryId: panelCategories.categoryId }).from(panelCategories).where(inArray(panelCategories.panelId, panelIds)),
+  ]);
+  const judges = new Map<string, { name: string; categoryIds: Set<string>; panelIds: Set<string> }>();
+  for (const seat of seats) {
+    // A judge scores for themselves; a scribe for every judge on their panel.
+    const forWhom = seat.role === "judge" ? judgeRows.filter((j) => j.panelId === seat.panelId && j.userId === viewerId) : judgeRows.filter((j) => j.panelId === seat.panelId);
+    for (const j of forWhom) {
+      const entry = judges.get(j.userId) ?? { name: j.name, categoryIds: new Set<string>(), panelIds: new Set<string>() };
+      entry.panelIds.add(seat.panelId);
+      for (const c of catRows.filter((c) => c.panelId === seat.panelId)) entry.categoryIds.add(c.categoryId);
+      judges.set(j.userId, entry);
+    }
+  }
+  return { seats, judges };
+}
+
+async function sheetsOfShow(reader: Pick<Tx, "select">, showId: string) {
+  const rows = await reader.select({ id: scoreSheets.id, name: scoreSheets.name, sheet: scoreSheets.sheet, isDefault: scoreSheets.isDefault }).from(scoreSheets).where(eq(scoreSheets.showId, showId));
+  return { byId: new Map(rows.map((r) => [r.id, r])), defaultId: rows.find((r) => r.isDefault)?.id ?? rows[0]?.id ?? null };
+}
+
+const released = (fields: readonly string[], e: { title: string; widthUm: number; lengthUm: number; techniques: string[]; quiltingMethod: string; patternSource: string; patternName: string; patternDesigner: string; statement: string; division: string }) => ({
+  ...(fields.includes("title") ? { title: e.title } : {}),
+  ...(fields.includes("size") ? { widthUm: e.widthUm, lengthUm: e.lengthUm, size: formatSize(e.widthUm, e.lengthUm) } : {}),
+  ...(fields.includes("techniques") ? { techniques: e.techniques } : {}),
+  ...(fields.includes("quiltingMethod") ? { quiltingMethod: e.quiltingMethod } : {}),
+  ...(fields.includes("pattern") ? { pattern: e.patternSource === "original" ? "Original design" : [e.patternName, e.patternDesigner && `by ${e.patternDesigner}`].filter(Boolean).join(" ") || "From a pattern" } : {}),
+  ...(fields.includes("statement") ? { statement: e.statement } : {}),
+  ...(fields.includes("division") ? { division: e.division } : {}),
+});
+
+const sheetView = (row: { id: string; entryId: string; judgeUserId: string; status: string; version: number; state: SheetState } | undefined, entryId: string, judgeUserId: string) => {
+  const state = row?.state ?? emptySheet();
+  return {
+    sheetRowId: row?.id ?? null,
+    entryId,
+    judgeUserId,
+    status: state.status,
+    version: state.version,
+    fields: Object.fromEntries(Object.entries(state.fields).map(([k, f]) => [k, { value: f.value, version: f.version }])),
+    conflicts: state.conflicts.map((c) => ({ field: c.field, serverValue: c.serverValue, clientValue: c.clientValue })),
+  };
+};
+
+/**
+ * Everything a tablet caches when a session starts: the viewer's panels, the judges they score
+ * for, the queue (released facts, category, photos, which sheet), the sheets, and each sheet's
+ * state so far. No names of entrants, makers or quilters: the select lists never name them.
+ */
+export async function judgingSession(viewer: Viewer, slug: string) {
+  const show = await requireShowRole(viewer, slug, AREA_ROLES.judging);
+  const [{ seats, judges }, settings, sheets] = await Promise.all([scoringRights(db, show.showId, viewer.id), settingsForShowId(show.showId), sheetsOfShow(db, show.showId)]);
+  const categoryIds = [...new Set([...judges.values()].flatMap((j) => [...j.categoryIds]))];
+  const cats = categoryIds.length
+    ? await db.select({ id: categories.id, code: categories.code, name: categories.name, method: categories.judgingMethod, scoreSheetId: categories.scoreSheetId }).from(categories).where(inArray(categories.id, categoryIds))
+    : [];
+  const rows = categoryIds.length
+    ? await db
+        .select({
+          id: entries.id,
+          entryNumber: entries.entryNumber,
+          categoryId: entries.categoryId,
+          title: entries.title,
+          widthUm: entries.widthUm,
+          lengthUm: entries.lengthUm,
+          techniques: entries.techniques,
+          quiltingMethod: entries.quiltingMethod,
+          patternSource: entries.patternSource,
+          patternName: entries.patternName,
+          patternDesigner: entries.patternDesigner,
+          statement: entries.statement,
+          division: entries.division,
+        })
+        .from(entries)
+        .where(and(eq(entries.showId, show.showId), inArray(entries.categoryId, categoryIds), eq(entries.judged, true), notInArray(entries.status, [...JUDGED_OUT]), isNotNull(entries.entryNumber)))
+        .orderBy(asc(entries.entryNumber))
+    : [];
+  const entryIds = rows.map((r) => r.id);
+  const [photos, sheetRows] = entryIds.length
+    ? await Promise.all([
+        db.select({ id: entryPhotos.id, entryId: entryPhotos.entryId, view: entryPhotos.view, widthPx: entryPhotos.widthPx, heightPx: entryPhotos.heightPx }).from(entryPhotos).where(inArray(entryPhotos.entryId, entryIds)),
+        db.select({ id: judgeSheets.id, entryId: judgeSheets.entryId, judgeUserId: judgeSheets.judgeUserId, status: judgeSheets.status, version: judgeSheets.version, state: judgeSheets.state }).from(judgeSheets).where(and(inArray(judgeSheets.entryId, entryIds), inArray(judgeSheets.judgeUserId, [...judges.keys()]))),
+      ])
+    : [[], []];
+  const catById = new Map(cats.map((c) => [c.id, c]));
+  const usedSheetIds = new Set(cats.map((c) => c.scoreSheetId ?? sheets.defaultId).filter((x): x is string => !!x));
+  return {
+    show: { slug: show.slug, name: show.name },
+    me: { id: viewer.id, seats },
+    judges: [...judges].map(([id, j]) => ({ id, name: j.name, categoryIds: [...j.categoryIds] })),
+    commentPolicy: settings.commentPolicy,
+    quickPhrases: settings.quickPhrases,
+    sheets: [...usedSheetIds].map((id) => ({ id, name: sheets.byId.get(id)!.name, sheet: sheets.byId.get(id)!.sheet })),
+    categories: cats.map((c) => ({ id: c.id, code: c.code, name: c.name, method: c.method, sheetId: c.scoreSheetId ?? sheets.defaultId })),
+    entries: rows.map((r) => ({
+      id: r.id,
+      entryNumber: r.entryNumber!,
+      categoryId: r.categoryId!,
+      ...released(settings.judgeFields, r),
+      photos: photos.filter((p) => p.entryId === r.id).map((p) => ({ id: p.id, view: p.view, widthPx: p.widthPx, heightPx: p.heightPx, webUrl: `/api/photos/${p.id}/web`, thumbUrl: `/api/photos/${p.id}/thumb` })),
+    })),
+    states: rows.flatMap((r) =>
+      [...judges].filter(([, j]) => j.categoryIds.has(r.categoryId!)).map(([judgeId]) => sheetView(sheetRows.find((s) => s.entryId === r.id && s.judgeUserId === judgeId), r.id, judgeId)),
+    ),
+  };
+}
+export type JudgingSession = Awaited<ReturnType<typeof judgingSession>>;
+
+// ---- Sync ----------------------------------------------------------------------------------------
+
+const SORT_VALUES = new Set(["kept", "set_aside"]);
+
+/** Why a change's value can't be used on this sheet, or null. Recorded as a refused outcome. */
+function invalidValue(change: SyncBatch["changes"][number], sheet: ScoreSheet | null, method: string, commentPolicy: string): string | null {
+  if (change.kind === "submit") return null;
+  const { field, value } = change;
+  if (field.startsWith("mark:")) {
+    if (method === "rank") return "This category is ranked, not scored.";
+    const criterion = sheet?.sections.flatMap((s) => s.criteria).find((c: Criterion) => c.id === field.slice(5));
+    if (!criterion) return "That criterion isn't on this category's sheet.";
+    if (value === null) return null;
+    return validateMark(criterion, value as Mark);
+  }
+  if (field.startsWith("comment:")) {
+    if (commentPolicy === "none") return "This show takes no written comments.";
+    if (typeof value !== "string" || value.length > 2000) return "A comment is text of up to 2,000 characters.";
+    if (field !== "comment:overall" && !sheet?.sections.some((s) => s.id === field.slice(8))) return "That section isn't on this category's sheet.";
+    return null;
+  }
+  if (field === "discuss") return typeof value === "boolean" ? null : "Discuss for award is yes or no.";
+  if (field === "sort") {
+    if (!method.startsWith("sort_")) return "This category has no sorting pass.";
+    return value === null || (typeof value === "string" && SORT_VALUES.has(value)) ? null : "Keep or set aside.";
+  }
+  if (field === "rank") {
+    if (method !== "rank" && method !== "sort_then_rank") return "This category is scored, not ranked.";
+    return value === null || (typeof value === "number" && Number.isInteger(value) && value >= 1 && value <= 1000) ? null : "A rank is a whole number from 1.";
+  }
+  return "Unknown field.";
+}
+
+function marksOf(state: SheetState): Record<string, Mark | undefined> {
+  return Object.fromEntries(Object.entries(state.fields).filter(([k, f]) => k.startsWith("mark:") && f.value !== null).map(([k, f]) => [k.slice(5), f.value as Mark]));
+}
+
+export type SyncResult = {
+  results: { key: string; entryId: string; outcome: ChangeOutcome; duplicate: boolean }[];
+  sheets: ReturnType<typeof sheetView>[];
+};
+
+/**
+ * Applies a tablet's batch: for each entry's sheet (locked while it merges), duplicates return
+ * their stored outcome, the rest are merged and stored with who entered them and for whom.
+ */
+export async function syncSheetChanges(viewer: Viewer, slug: string, batch: SyncBatch): Promise<SyncResult> {
+  const show = await requireShowRole(viewer, slug, AREA_ROLES.judging);
+  const { judges } = await scoringRights(db, show.showId, viewer.id);
+  const rights = judges.get(batch.forJudge);
+  if (!rights) throw forbiddenError(batch.forJudge === viewer.id ? "You are not on a judging panel of this show." : "You can enter scores only for a judge on your panel.");
+  const settings = await settingsForShowId(show.showId);
+  const sheets = await sheetsOfShow(db, show.showId);
+  const byEntry = new Map<string, SyncBatch["changes"]>();
+  for (const c of batch.changes) byEntry.set(c.entryId, [...(byEntry.get(c.entryId) ?? []), c]);
+
+  return db.transaction(async (tx) => {
+    const out: SyncResult = { results: [], sheets: [] };
+    const targets = byEntry.size
+      ? await tx
+          .select({ id: entries.id, categoryId: entries.categoryId, method: categories.judgingMethod, scoreSheetId: categories.scoreSheetId, status: entries.status, judged: entries.judged })
+          .from(entries)
+          .innerJoin(categories, eq(categories.id, entries.categoryId))
+          .where(and(eq(entries.showId, show.showId), inArray(entries.id, [...byEntry.keys()])))
+      : [];
+    for (const [entryId, changes] of byEntry) {
+      const target = targets.find((t) => t.id === entryId);
+      if (!target || !target.categoryId || !rights.categoryIds.has(target.categoryId) || !target.judged || (JUDGED_OUT as readonly string[]).includes(target.status)) {
+        for (const c of changes) out.results.push({ key: c.key, entryId, outcome: { kind: "refused", text: "This entry isn't in your queue." }, duplicate: false });
+        continue;
+      }
+      const sheetId = target.scoreSheetId ?? sheets.defaultId;
+      const sheet = sheetId ? (sheets.byId.get(sheetId)?.sheet ?? null) : null;
+      await tx.insert(judgeSheets).values({ showId: show.showId, entryId, judgeUserId: batch.forJudge, scoreSheetId: sheetId, state: emptySheet() }).onConflictDoNothing();
+      const [row] = await tx.select().from(judgeSheets).where(and(eq(judgeSheets.entryId, entryId), eq(judgeSheets.judgeUserId, batch.forJudge))).for("update");
+      const known = await tx.select({ changeKey: scoreChanges.changeKey, outcome: scoreChanges.outcome, sheetId: scoreChanges.sheetId }).from(scoreChanges).where(inArray(scoreChanges.changeKey, changes.map((c) => c.key)));
+      const seen = new Map(known.filter((k) => k.sheetId === row!.id).map((k) => [k.changeKey, k.outcome]));
+      const foreign = new Set(known.filter((k) => k.sheetId !== row!.id).map((k) => k.changeKey));
+
+      // Values the sheet can't take are refused one by one; the rest merge.
+      let state = row!.state;
+      const stored: (typeof scoreChanges.$inferInsert)[] = [];
+      for (const c of changes) {
+        if (foreign.has(c.key)) {
+          out.results.push({ key: c.key, entryId, outcome: { kind: "refused", text: "That change key was already used for another sheet." }, duplicate: false });
+          continue;
+        }
+        const bad = seen.has(c.key) ? null : invalidValue(c, sheet, target.method, settings.commentPolicy);
+        const change: SheetChange = c.kind === "submit" ? { kind: "submit", key: c.key, deviceId: batch.deviceId, seq: c.seq, seen: c.seen } : { kind: c.kind, key: c.key, deviceId: batch.deviceId, seq: c.seq, field: c.field, value: c.value as Json, baseVersion: c.baseVersion };
+        let outcome: ChangeOutcome;
+        let duplicate = false;
+        if (bad) outcome = { kind: "refused", text: bad };
+        else {
+          const r = applyBatch(state, [change], seen);
+          state = r.state;
+          outcome = r.outcomes[0]!.outcome;
+          duplicate = r.outcomes[0]!.duplicate;
+        }
+        out.results.push({ key: c.key, entryId, outcome, duplicate });
+        if (!duplicate) {
+          seen.set(c.key, outcome);
+          stored.push({
+            showId: show.showId,
+            sheetId: row!.id,
+            changeKey: c.key,
+            deviceId: batch.deviceId,
+            seq: c.seq,
+            kind: c.kind,
+            field: c.kind === "submit" ? null : c.field,
+            value: c.kind === "submit" ? (c.seen as Json) : (c.value as Json),
+            baseVersion: c.kind === "submit" ? null : c.baseVersion,
+            enteredBy: viewer.id,
+            forJudge: batch.forJudge,
+            clientAt: c.clientAt ? new Date(c.clientAt) : null,
+            outcome,
+          });
+        }
+      }
+      if (stored.length) {
+        await tx.insert(scoreChanges).values(stored);
+        const submittedNow = row!.status === "open" && state.status === "submitted";
+        const total = sheet ? sheetTotal(sheet, marksOf(state), { partial: true }) : null;
+        await tx
+          .update(judgeSheets)
+          .set({ state, status: state.status, version: state.version, total: total ? ({ total: total.total, complete: total.complete, percent: total.percent } as Json) : null, submittedAt: submittedNow ? new Date() : row!.submittedAt, updatedAt: new Date() })
+          .where(eq(judgeSheets.id, row!.id));
+        if (submittedNow) {
+          await writeAudit(tx, { actorUserId: viewer.id, showId: show.showId, action: "judge_sheet.submitted", subjectType: "judge_sheet", subjectId: row!.id, after: { entryId, judgeUserId: batch.forJudge, enteredBy: viewer.id, total: total?.total ?? null } });
+        }
+      }
+      out.sheets.push(sheetView({ ...row!, state }, entryId, batch.forJudge));
+    }
+    return out;
+  });
+}
+
+/** The chair's view of one sheet's history: every change, who entered it and for whom. */
+export async function sheetHistory(viewer: Viewer, slug: string, sheetRowId: string) {
+  const { showId } = await requireShowRole(viewer, slug, ["chair"]);
+  const entered = user;
+  const rows = await db
+    .select({ at: scoreChanges.receivedAt, clientAt: scoreChanges.clientAt, kind: scoreChanges.kind, field: scoreChanges.field, value: scoreChanges.value, outcome: scoreChanges.outcome, deviceId: scoreChanges.deviceId, enteredBy: scoreChanges.enteredBy, forJudge: scoreChanges.forJudge, enteredByName: entered.name })
+    .from(scoreChanges)
+    .innerJoin(entered, eq(entered.id, scoreChanges.enteredBy))
+    .where(and(eq(scoreChanges.sheetId, sheetRowId), eq(scoreChanges.showId, showId)))
+    .orderBy(asc(scoreChanges.id));
+  const judgeIds = [...new Set(rows.map((r) => r.forJudge))];
+  const names = judgeIds.length ? await db.select({ id: user.id, name: user.name }).from(user).where(inArray(user.id, judgeIds)) : [];
+  const nameOf = new Map(names.map((n) => [n.id, n.name]));
+  return rows.map((r) => ({ ...r, forJudgeName: nameOf.get(r.forJudge) ?? "?", text: r.enteredBy === r.forJudge ? `${r.enteredByName}` : `${r.enteredByName} for ${nameOf.get(r.forJudge) ?? "?"}` }));
 }

@@ -45,6 +45,9 @@ export const DEFAULT_SETTINGS = {
   categoryOverlap: "flag" as "flag" | "firstByPrecedence",
   /** 1 in (25,400 µm): within 1 in of the registered size, a common show rule. */
   sizeToleranceUm: 25_400,
+  commentPolicy: "all" as "all" | "placed" | "none",
+  quickPhrases: [] as string[],
+  judgeFields: ["title", "size", "techniques", "quiltingMethod", "pattern"] as string[],
 };
 
 export type CurrentRules = { id: string; version: number; rulesText: string; releaseText: string; publishedAt: Date };
@@ -80,6 +83,9 @@ const settingsColumns = {
   replyToEmail: showSettings.replyToEmail,
   categoryOverlap: showSettings.categoryOverlap,
   sizeToleranceUm: showSettings.sizeToleranceUm,
+  commentPolicy: showSettings.commentPolicy,
+  quickPhrases: showSettings.quickPhrases,
+  judgeFields: showSettings.judgeFields,
   updatedAt: showSettings.updatedAt,
 };
 
@@ -109,10 +115,11 @@ async function currentRulesFor(reader: Reader, showId: string): Promise<CurrentR
 export async function settingsForShowId(showId: string, reader: Reader = db): Promise<EffectiveSettings> {
   const [row] = await reader.select(settingsColumns).from(showSettings).where(eq(showSettings.showId, showId)).limit(1);
   const currentRules = await currentRulesFor(reader, showId);
-  if (!row) return { ...DEFAULT_SETTINGS, requiredPhotoViews: [...DEFAULT_SETTINGS.requiredPhotoViews], techniques: [...DEFAULT_SETTINGS.techniques], showId, saved: false, updatedAt: null, currentRules };
-  const { updatedAt, categoryOverlap, ...values } = row;
+  if (!row) return { ...DEFAULT_SETTINGS, requiredPhotoViews: [...DEFAULT_SETTINGS.requiredPhotoViews], techniques: [...DEFAULT_SETTINGS.techniques], quickPhrases: [], judgeFields: [...DEFAULT_SETTINGS.judgeFields], showId, saved: false, updatedAt: null, currentRules };
+  const { updatedAt, categoryOverlap, commentPolicy, ...values } = row;
   const overlap = categoryOverlap === "firstByPrecedence" ? "firstByPrecedence" : "flag";
-  return { ...values, categoryOverlap: overlap, showId, saved: true, updatedAt, currentRules };
+  const policy = commentPolicy === "placed" || commentPolicy === "none" ? commentPolicy : "all";
+  return { ...values, categoryOverlap: overlap, commentPolicy: policy, showId, saved: true, updatedAt, currentRules };
 }
 
 // ── Reading ─────────────────────────────────────────────────────────────────────────────────────

@@ -3,6 +3,7 @@
 // that took its entries over.
 import { sql } from "drizzle-orm";
 import { check, foreignKey, index, integer, jsonb, pgTable, text, timestamp, uniqueIndex, uuid } from "drizzle-orm/pg-core";
+import { judgingMethod, scoreSheets } from "./judging";
 import type { Condition } from "../../scoring/categories";
 import { shows } from "./shows";
 
@@ -23,6 +24,9 @@ export const categories = pgTable(
     cap: integer(),
     /** Set when the chair merged this category into another: its entries belong there now. */
     mergedIntoId: uuid(),
+    /** The score sheet judges use here; null: the show's default sheet. */
+    scoreSheetId: uuid().references(() => scoreSheets.id, { onDelete: "set null" }),
+    judgingMethod: judgingMethod().notNull().default("points"),
     createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
   },

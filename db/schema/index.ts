@@ -4,6 +4,7 @@ export * from "./shows";
 export * from "./settings";
 export * from "./people";
 export * from "./categories";
+export * from "./judging";
 export * from "./entries";
 export * from "./payments";
 export * from "./audit";

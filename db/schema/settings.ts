@@ -41,6 +41,12 @@ export const showSettings = pgTable("show_settings", {
   categoryOverlap: text().notNull().default("flag"),
   /** How far the size measured at intake may be off the registered size (µm; 25,400 = 1 in). */
   sizeToleranceUm: integer().notNull().default(25_400),
+  /** Which entries get written comments: "all", "placed" (ribbon winners only) or "none". */
+  commentPolicy: text().notNull().default("all"),
+  /** Phrases a judge can tap into a comment. */
+  quickPhrases: text().array().notNull().default(sql`'{}'::text[]`),
+  /** What judges see of an entry besides its number, photos and category (never who made it). */
+  judgeFields: text().array().notNull().default(sql`'{title,size,techniques,quiltingMethod,pattern}'::text[]`),
   updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
 });
 

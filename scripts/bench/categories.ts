@@ -2,6 +2,7 @@
 // the rule editor's preview over the same entries. Prints figures only; nothing passes or fails.
 import { decideAll, previewRule, type Bound, type CategoryRule, type Condition, type EntryFacts } from "../../scoring/categories";
 import { mulberry32 } from "../../db/seed/demo-data";
+import { checkSet, planMoves, type EntryInSet } from "../../scoring/category-sets";
 
 const IN = 25_400; // µm (NIST SP 811)
 const ENTRIES = 10_000;
@@ -90,4 +91,31 @@ export async function benchCategories(): Promise<void> {
   }
   console.log(`categories: previewRule over ${ENTRIES.toLocaleString("en-US")} entries, ${PREVIEW_RUNS} runs`);
   console.log(`  median ${quantile(previewMs, 0.5).toFixed(1)} ms, p95 ${quantile(previewMs, 0.95).toFixed(1)} ms`);
+
+  // Everything the chair's editor recomputes on a change: the rule's preview, the gap and overlap
+  // check over the whole set, and the moves the save would make.
+  const decisions = decideAll(entries, rules);
+  const inSet: EntryInSet[] = entries.map((facts, i) => {
+    const d = decisions[i]!;
+    const current = d.kind === "one" ? { state: "decided" as const, categoryId: d.category.id } : d.kind === "several" ? { state: "fits_several" as const, candidateIds: d.categories.map((c) => c.id) } : { state: "fits_none" as const };
+    return { id: `e${i}`, entryNumber: 101 + i, title: `Entry ${i}`, facts, current };
+  });
+  const editorMs: number[] = [];
+  let moved = 0;
+  for (let i = 0; i < PREVIEW_RUNS + 1; i++) {
+    const limit = 150 + (i % 20);
+    const rule: CategoryRule = {
+      ...edited,
+      conditions: edited.conditions.map((c) => (c.kind === "size" ? { ...c, bounds: [{ op: ">=", value: limit, unit: "in" }, { op: "<", value: 240, unit: "in" }] } : c)),
+    };
+    const next = rules.map((r) => (r.id === rule.id ? rule : r));
+    const t0 = performance.now();
+    previewRule(rule, rules, entries);
+    checkSet(next);
+    moved = planMoves(inSet, next).length;
+    if (i > 0) editorMs.push(performance.now() - t0);
+  }
+  const editorMedian = quantile(editorMs, 0.5);
+  console.log(`categories: the editor's whole preview (rule preview + gap/overlap check + moves) over ${ENTRIES.toLocaleString("en-US")} entries, ${PREVIEW_RUNS} runs`);
+  console.log(`  median ${editorMedian.toFixed(1)} ms, p95 ${quantile(editorMs, 0.95).toFixed(1)} ms (last edit moves ${moved}); ${(editorMedian / 100).toFixed(2)}× a 100 ms "feels instant" budget`);
 }

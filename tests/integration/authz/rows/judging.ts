@@ -1,0 +1,37 @@
+// Access rows for judging: the tablet's session and sync routes (judges and scribes on a panel)
+// and the chair's progress board.
+import { db } from "@/db/client";
+import { judgingPanels, panelMembers } from "@/db/schema";
+import { only, type Case, type World } from "../table";
+
+const seated = new WeakMap<World, Promise<void>>();
+
+/** Puts the world's judge and scribe on one panel (once per world), so they may sync. */
+function seatPanel(w: World): Promise<void> {
+  let p = seated.get(w);
+  if (!p) {
+    p = (async () => {
+      const [panel] = await db.insert(judgingPanels).values({ showId: w.show.id, name: "Access panel" }).returning();
+      await db.insert(panelMembers).values([
+        { panelId: panel!.id, userId: w.users.judge.id, role: "judge" },
+        { panelId: panel!.id, userId: w.users.scribe.id, role: "scribe" },
+      ]);
+    })();
+    seated.set(w, p);
+  }
+  return p;
+}
+
+export const routes: Record<string, Case> = {
+  "GET /api/shows/[slug]/judging/session": { expect: only({ judge: 200, scribe: 200 }), request: async (w) => ({ params: { slug: w.show.slug } }) },
+  // A scribe enters for the judge on their panel; anyone else names themselves and is refused.
+  "POST /api/shows/[slug]/judging/sync": {
+    expect: only({ judge: 200, scribe: 200 }),
+    request: async (w, role) => {
+      await seatPanel(w);
+      const forJudge = role === "judge" || role === "scribe" ? w.users.judge.id : role === "anonymous" ? "nobody" : w.users[role].id;
+      return { params: { slug: w.show.slug }, body: { deviceId: `device-${role}-0001`, forJudge, changes: [] } };
+    },
+  },
+  "GET /api/shows/[slug]/judging/progress": { expect: only({ chair: 200 }), request: async (w) => ({ params: { slug: w.show.slug } }) },
+};
