@@ -5,6 +5,7 @@ import { eq } from "drizzle-orm";
 import { headers as nextHeaders } from "next/headers";
 import { db } from "@/db/client";
 import { showRoles, shows, type ShowRole } from "@/db/schema";
+type ShowStatus = (typeof shows.$inferSelect)["status"];
 import { auth } from "@/lib/auth";
 import { forbiddenError, notFound, unauthorized } from "@/lib/errors";
 
@@ -67,9 +68,9 @@ export async function requireShowRole(
   viewer: Viewer,
   showSlug: string,
   allowed: readonly ShowRole[],
-): Promise<{ showId: string; slug: string; name: string; roles: ShowRole[] }> {
+): Promise<{ showId: string; slug: string; name: string; status: ShowStatus; roles: ShowRole[] }> {
   const [show] = await db
-    .select({ id: shows.id, slug: shows.slug, name: shows.name })
+    .select({ id: shows.id, slug: shows.slug, name: shows.name, status: shows.status })
     .from(shows)
     .where(eq(shows.slug, showSlug))
     .limit(1);
@@ -78,7 +79,7 @@ export async function requireShowRole(
   if (!roles.some((r) => allowed.includes(r))) {
     throw forbiddenError(`This needs the ${allowed.join(" or ")} role at ${show.name}.`);
   }
-  return { showId: show.id, slug: show.slug, name: show.name, roles };
+  return { showId: show.id, slug: show.slug, name: show.name, status: show.status, roles };
 }
 
 /** Areas of a show and the roles that may enter them; pages, routes and navigation use these. */

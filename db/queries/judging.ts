@@ -8,7 +8,7 @@ import { categories, entries, entryPhotos, judgeSheets, judgingPanels, panelCate
 import { writeAudit } from "@/db/queries/audit";
 import { settingsForShowId } from "@/db/queries/settings";
 import { JUDGED_OUT } from "@/db/queries/judging-setup";
-import { forbiddenError } from "@/lib/errors";
+import { conflict, forbiddenError } from "@/lib/errors";
 import type { SyncBatch } from "@/lib/schemas/judging";
 import { AREA_ROLES, requireShowRole, type Viewer } from "@/lib/session";
 import { sheetTotal, validateMark, type Criterion, type Mark, type ScoreSheet } from "@/scoring/score-sheets";
@@ -140,7 +140,7 @@ export async function judgingSession(viewer: Viewer, slug: string) {
   const catById = new Map(cats.map((c) => [c.id, c]));
   const usedSheetIds = new Set(cats.map((c) => c.scoreSheetId ?? sheets.defaultId).filter((x): x is string => !!x));
   return {
-    show: { slug: show.slug, name: show.name },
+    show: { slug: show.slug, name: show.name, status: show.status, judgingOpen: show.status === "judging" },
     me: { id: viewer.id, seats },
     judges: [...judges].map(([id, j]) => ({ id, name: j.name, categoryIds: [...j.categoryIds] })),
     commentPolicy: settings.commentPolicy,
@@ -209,6 +209,8 @@ export type SyncResult = {
  */
 export async function syncSheetChanges(viewer: Viewer, slug: string, batch: SyncBatch): Promise<SyncResult> {
   const show = await requireShowRole(viewer, slug, AREA_ROLES.judging);
+  // Sheets take changes only while the show is judging; the tablet keeps them until then.
+  if (show.status !== "judging") throw conflict(show.status === "results_published" || show.status === "archived" ? "Judging is over at this show; sheets are closed." : "Judging hasn't started at this show yet; changes stay on this device until it does.");
   const { judges } = await scoringRights(db, show.showId, viewer.id);
   const rights = judges.get(batch.forJudge);
   if (!rights) throw forbiddenError(batch.forJudge === viewer.id ? "You are not on a judging panel of this show." : "You can enter scores only for a judge on your panel.");

@@ -10,6 +10,7 @@ import * as schema from "../schema";
 import { photoSizeFor, renderPatchwork, type PatchworkView } from "../../storage/patchwork";
 import { factsOf, placeEntry, prepareSet, type ShowCategory } from "../../scoring/category-sets";
 import { GUILD_STARTER } from "../../scoring/starter-sets";
+import { DEMO_PANELS, DEMO_QUICK_PHRASES, DEMO_SHEET } from "./demo-judging";
 import { DEMO_PASSWORD, DEMO_RULES, DEMO_SETTINGS, demoScenario, type DemoQuilt, type DemoShowRole } from "./demo-data";
 
 /**
@@ -190,12 +191,22 @@ export async function seedDemo(opts: SeedDemoOptions): Promise<{ created: boolea
     await tx.insert(schema.entrantProfiles).values(profiles);
     await tx.insert(schema.shows).values(showRow);
     await tx.insert(schema.showRoles).values(roles);
-    await tx.insert(schema.showSettings).values({ showId, ...DEMO_SETTINGS, lateFeeFromAt: new Date(DEMO_SETTINGS.lateFeeFromAt) });
+    await tx.insert(schema.showSettings).values({ showId, ...DEMO_SETTINGS, lateFeeFromAt: new Date(DEMO_SETTINGS.lateFeeFromAt), quickPhrases: DEMO_QUICK_PHRASES });
     await tx.insert(schema.showRulesVersions).values({ id: rulesVersionId, showId, version: 1, ...DEMO_RULES, publishedBy: chairId, publishedAt: showCreatedAt });
     const lastNumber = Math.max(100, ...entryRows.map((e) => e.entryNumber ?? 0));
     await tx.insert(schema.showEntryCounters).values({ showId, lastNumber });
     await tx.insert(schema.categories).values(categoryRows);
     await tx.insert(schema.entries).values(entryRows);
+    await tx.insert(schema.scoreSheets).values({ showId, name: DEMO_SHEET.name, sheet: DEMO_SHEET.sheet, isDefault: true, createdAt: showCreatedAt, updatedAt: showCreatedAt });
+    const codeToId = new Map(categorySet.map((c) => [c.code, c.id]));
+    for (const p of DEMO_PANELS) {
+      const [panel] = await tx.insert(schema.judgingPanels).values({ showId, name: p.name, day: p.day, room: p.room, createdAt: showCreatedAt }).returning({ id: schema.judgingPanels.id });
+      await tx.insert(schema.panelMembers).values([
+        ...p.judges.map((email) => ({ panelId: panel!.id, userId: idOf(email), role: "judge" as const })),
+        ...p.scribes.map((email) => ({ panelId: panel!.id, userId: idOf(email), role: "scribe" as const })),
+      ]);
+      await tx.insert(schema.panelCategories).values(p.categoryCodes.map((code) => ({ panelId: panel!.id, categoryId: codeToId.get(code)! })));
+    }
     log(`rows written for ${users.length} people and ${entryRows.length} entries; rendering ${photoJobs.length} photos`);
 
     // Upload inside the transaction: if any upload fails, the rows roll back with it. Objects

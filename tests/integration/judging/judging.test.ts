@@ -203,6 +203,15 @@ describe("syncing sheet changes", () => {
     expect(r.results.map((x) => x.outcome.kind)).toEqual(["refused", "applied", "refused"]);
   });
 
+  it("takes no changes before judging starts: the tablet keeps them", async () => {
+    const early = await makeShow({ status: "entries_closed" });
+    await grantRole(judge.id, early.id, "judge");
+    await expect(syncSheetChanges(await viewerOf(judge), early.slug, batchOf("tab-juniper-0001", judge.id, []))).rejects.toMatchObject({
+      status: 409,
+      message: "Judging hasn't started at this show yet; changes stay on this device until it does.",
+    });
+  });
+
   it("answers a bad batch at the route with 400 and field errors", async () => {
     const res = await syncRoute(new Request(`http://t/api/shows/${show.slug}/judging/sync`, { method: "POST", headers: { cookie: judge.cookie, "content-type": "application/json" }, body: JSON.stringify({ deviceId: "x", forJudge: judge.id, changes: [{ kind: "set" }] }) }), { params: Promise.resolve({ slug: show.slug }) });
     expect(res.status).toBe(400);

@@ -2,20 +2,28 @@
 // and the chair's progress board.
 import { db } from "@/db/client";
 import { judgingPanels, panelMembers } from "@/db/schema";
+import { grantRole, makeShow } from "../../../helpers/factories";
 import { only, type Case, type World } from "../table";
 
-const seated = new WeakMap<World, Promise<void>>();
+const seated = new WeakMap<World, Promise<string>>();
 
-/** Puts the world's judge and scribe on one panel (once per world), so they may sync. */
-function seatPanel(w: World): Promise<void> {
+/**
+ * A show of its own that is judging (so the shared show keeps its stage), with the world's judge
+ * and scribe on one panel there; made once per world. Returns its slug.
+ */
+function judgingShow(w: World): Promise<string> {
   let p = seated.get(w);
   if (!p) {
     p = (async () => {
-      const [panel] = await db.insert(judgingPanels).values({ showId: w.show.id, name: "Access panel" }).returning();
+      const show = await makeShow({ status: "judging" });
+      await grantRole(w.users.judge.id, show.id, "judge");
+      await grantRole(w.users.scribe.id, show.id, "scribe");
+      const [panel] = await db.insert(judgingPanels).values({ showId: show.id, name: "Access panel" }).returning();
       await db.insert(panelMembers).values([
         { panelId: panel!.id, userId: w.users.judge.id, role: "judge" },
         { panelId: panel!.id, userId: w.users.scribe.id, role: "scribe" },
       ]);
+      return show.slug;
     })();
     seated.set(w, p);
   }
@@ -28,9 +36,9 @@ export const routes: Record<string, Case> = {
   "POST /api/shows/[slug]/judging/sync": {
     expect: only({ judge: 200, scribe: 200 }),
     request: async (w, role) => {
-      await seatPanel(w);
+      const slug = await judgingShow(w);
       const forJudge = role === "judge" || role === "scribe" ? w.users.judge.id : role === "anonymous" ? "nobody" : w.users[role].id;
-      return { params: { slug: w.show.slug }, body: { deviceId: `device-${role}-0001`, forJudge, changes: [] } };
+      return { params: { slug }, body: { deviceId: `device-${role}-0001`, forJudge, changes: [] } };
     },
   },
   "GET /api/shows/[slug]/judging/progress": { expect: only({ chair: 200 }), request: async (w) => ({ params: { slug: w.show.slug } }) },
