@@ -7,6 +7,7 @@ import { DEMO_PASSWORD } from "../../db/seed/demo-data";
 import { must, NEXT, profileEnv, recreateDatabase, ROOT, say, serve, startAll, waitForHealth } from "../lib/app";
 import { apiVsBare } from "./api-vs-bare";
 import { benchCategories } from "./categories";
+import { benchJudgingSync } from "./judging-sync";
 import { benchPhotos } from "./photos";
 
 async function main() {
@@ -21,11 +22,15 @@ async function main() {
   const services = await startAll("bench", env);
   let app: ChildProcess | undefined;
   try {
-    if (process.env.BENCH_SKIP_BUILD !== "1") await must("next build", process.execPath, [NEXT, "build"], env);
+    if (process.env.BENCH_SKIP_BUILD !== "1") {
+      await must("next build", process.execPath, [NEXT, "build"], env);
+      await must("serwist build", process.execPath, [path.join(ROOT, "node_modules/@serwist/cli/cli.js"), "build", "serwist.config.mjs"], env);
+    }
     await must("seeding", "npx", ["tsx", path.join(ROOT, "scripts/seed.ts")], env);
     app = serve({ ...env, AUTH_SIGN_IN_LIMIT_PER_MINUTE: "1000" }, env.PORT!, "127.0.0.1");
     await waitForHealth(env.APP_URL!, 90_000);
-    await apiVsBare({ appUrl: env.APP_URL!, databaseUrl: env.DATABASE_URL!, email: "entrant1@ribbonry.test", password: DEMO_PASSWORD, durationSec });
+    const floor = await apiVsBare({ appUrl: env.APP_URL!, databaseUrl: env.DATABASE_URL!, email: "entrant1@ribbonry.test", password: DEMO_PASSWORD, durationSec });
+    await benchJudgingSync({ appUrl: env.APP_URL!, databaseUrl: env.DATABASE_URL!, floor });
   } finally {
     app?.kill("SIGTERM");
     await services.stop();
