@@ -137,7 +137,6 @@ export async function judgingSession(viewer: Viewer, slug: string) {
         db.select({ id: judgeSheets.id, entryId: judgeSheets.entryId, judgeUserId: judgeSheets.judgeUserId, status: judgeSheets.status, version: judgeSheets.version, state: judgeSheets.state }).from(judgeSheets).where(and(inArray(judgeSheets.entryId, entryIds), inArray(judgeSheets.judgeUserId, [...judges.keys()]))),
       ])
     : [[], []];
-  const catById = new Map(cats.map((c) => [c.id, c]));
   const usedSheetIds = new Set(cats.map((c) => c.scoreSheetId ?? sheets.defaultId).filter((x): x is string => !!x));
   return {
     show: { slug: show.slug, name: show.name, status: show.status, judgingOpen: show.status === "judging" },

@@ -8,6 +8,7 @@ import { must, NEXT, profileEnv, recreateDatabase, ROOT, say, serve, startAll, w
 import { apiVsBare } from "./api-vs-bare";
 import { benchCategories } from "./categories";
 import { benchJudgingSync } from "./judging-sync";
+import { benchResults } from "./results";
 import { benchPhotos } from "./photos";
 
 async function main() {
@@ -31,6 +32,7 @@ async function main() {
     await waitForHealth(env.APP_URL!, 90_000);
     const floor = await apiVsBare({ appUrl: env.APP_URL!, databaseUrl: env.DATABASE_URL!, email: "entrant1@ribbonry.test", password: DEMO_PASSWORD, durationSec });
     await benchJudgingSync({ appUrl: env.APP_URL!, databaseUrl: env.DATABASE_URL!, floor });
+    await benchResults(env.DATABASE_URL!);
   } finally {
     app?.kill("SIGTERM");
     await services.stop();

@@ -1,0 +1,64 @@
+// Totals for 5,000 entries × 3 judges × 8 criteria: one SQL statement against loading every
+// submitted sheet total into JavaScript (db/totals.ts), with the ratio. Prints figures only.
+import { randomUUID } from "node:crypto";
+import { drizzle } from "drizzle-orm/postgres-js";
+import postgres from "postgres";
+import * as schema from "../../db/schema";
+import { totalsInJs, totalsInSql } from "../../db/totals";
+
+const ENTRIES = 5_000;
+const JUDGES = 3;
+const CRITERIA = 8;
+const CATEGORIES = 25;
+const RUNS = 5;
+
+export async function benchResults(databaseUrl: string): Promise<void> {
+  const client = postgres(databaseUrl, { max: 4, onnotice: () => {} });
+  const db = drizzle(client, { schema, casing: "snake_case" });
+  try {
+    const [show] = await client`insert into shows (slug, name, guild_name, venue_name, time_zone, status) values (${`bench-results-${randomUUID().slice(0, 8)}`}, 'Bench results show', 'Bench guild', 'Bench hall', 'America/Chicago', 'judging') returning id`;
+    const showId = show!.id as string;
+    const entrant = randomUUID();
+    await client`insert into "user" (id, name, email, email_verified) values (${entrant}, 'Bench Entrant', ${`${entrant}@bench.test`}, true)`;
+    const judges = Array.from({ length: JUDGES }, () => randomUUID());
+    for (const j of judges) await client`insert into "user" (id, name, email, email_verified) values (${j}, 'Bench Judge', ${`${j}@bench.test`}, true)`;
+    await client`insert into categories (show_id, code, name, precedence, conditions)
+      select ${showId}, 'R' || g, 'Bench ' || g, g, '[]'::jsonb from generate_series(1, ${CATEGORIES}::int) g`;
+    await client`insert into entries (show_id, entrant_user_id, entry_number, title, width_um, length_um, quilting_method, status, category_id, category_state)
+      select ${showId}, ${entrant}, 100 + g, 'Bench quilt', 1524000, 2032000, 'home_machine', 'received',
+        (select id from categories where show_id = ${showId} and code = 'R' || (1 + g % ${CATEGORIES}::int)), 'decided'
+      from generate_series(1, ${ENTRIES}::int) g`;
+    // Each sheet holds eight marks (0–12.5 points each) in its merged state and their total.
+    await client`
+      insert into judge_sheets (show_id, entry_id, judge_user_id, status, version, state, total)
+      select ${showId}::uuid, e.id, j.id, 'submitted', ${CRITERIA + 1}::int,
+        jsonb_build_object('status', 'submitted', 'version', ${CRITERIA + 1}::int, 'conflicts', '[]'::jsonb,
+          'fields', (select jsonb_object_agg('mark:c' || c, jsonb_build_object('value', jsonb_build_object('kind', 'points', 'points', m.p), 'version', 1, 'deviceId', 'bench', 'seq', c, 'changeKey', 'k'))
+                     from (select c, ((hashtext(e.id::text || j.id || c) & 1023) % 26) / 2.0 as p from generate_series(1, ${CRITERIA}::int) c) m)),
+        jsonb_build_object('total', ((hashtext(e.id::text || j.id) & 1023) % 5001) / 100.0 + 50, 'complete', true)
+      from entries e cross join (select unnest(${judges}::text[]) as id) j
+      where e.show_id = ${showId}::uuid`;
+    await client`analyze judge_sheets`;
+
+    const time = async (f: () => Promise<unknown>) => {
+      await f(); // warm-up
+      const ms: number[] = [];
+      for (let i = 0; i < RUNS; i++) {
+        const t0 = performance.now();
+        await f();
+        ms.push(performance.now() - t0);
+      }
+      return ms.sort((a, b) => a - b)[Math.floor(RUNS / 2)]!;
+    };
+    const inSql = await time(() => totalsInSql(db, showId));
+    const inJs = await time(() => totalsInJs(db, showId));
+    const rows = (await totalsInSql(db, showId)).length;
+    console.log(`\nResults: totals for ${ENTRIES.toLocaleString("en-US")} entries × ${JUDGES} judges × ${CRITERIA} criteria (${rows.toLocaleString("en-US")} entries totalled), median of ${RUNS}`);
+    console.log(`  in SQL (one statement, z-scores by window functions): ${inSql.toFixed(1)} ms`);
+    console.log(`  in JavaScript (load ${(ENTRIES * JUDGES).toLocaleString("en-US")} totals, scoring/ranking.ts): ${inJs.toFixed(1)} ms`);
+    console.log(`  ratio (JavaScript / SQL): ${(inJs / inSql).toFixed(2)}×`);
+    console.log("  (the score-matrix export benchmark comes with the exports)");
+  } finally {
+    await client.end();
+  }
+}
