@@ -1,14 +1,16 @@
 "use client";
-// One quilt on "My entries": number, status in plain words, what is still missing, and a
-// Withdraw button with a confirm step that says what refund it would give.
+// One quilt on "My entries": number, status in plain words, its category and why, what is still
+// missing, and a Withdraw button with a confirm step that says what refund it would give.
 import Link from "next/link";
 import { useState, useTransition } from "react";
 import { CircleSlash } from "lucide-react";
 import { withdrawEntryAction } from "@/app/(entrant)/my/actions";
 import { EntryStatusBadge, entryStatusInfo } from "@/components/entries/entry-status";
+import { plainReasons, sizeFirst, storedHeadline } from "@/components/entries/category-words";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { formatMoney } from "@/scoring/fees";
+import { UNSET_LENGTH_UM } from "@/scoring/entry-completeness";
 import { formatSize } from "@/scoring/units";
 
 export type EntryCardProps = {
@@ -24,6 +26,8 @@ export type EntryCardProps = {
     paidByCard: boolean;
     canWithdraw: boolean;
     refundIfWithdrawnCents: number;
+    category: { state: string; code: string | null; name: string | null; reasons: string[] } | null;
+    waitlistReason: string;
   };
   currency: string;
   refundPercent: number;
@@ -47,10 +51,17 @@ export function EntryCard({ entry: e, currency, refundPercent }: EntryCardProps)
       </div>
       <h3 className="text-xl">
         <Link href={`/entries/${e.id}`} className="inline-flex min-h-tap items-center text-ink underline-offset-4 hover:underline">
-          {e.title}
+          {e.title || "Untitled quilt"}
         </Link>
       </h3>
-      <p className="text-ink-muted">{formatSize(e.widthUm, e.lengthUm)}</p>
+      {/* A new draft holds a 1 µm placeholder size until the quilt step is saved. */}
+      <p className="text-ink-muted">{e.widthUm > UNSET_LENGTH_UM && e.lengthUm > UNSET_LENGTH_UM ? formatSize(e.widthUm, e.lengthUm) : "Size not given yet"}</p>
+      <CategoryLine category={e.category} />
+      {e.waitlistReason ? (
+        <p className="text-sm">
+          <span className="font-semibold">Why it waits:</span> {e.waitlistReason}
+        </p>
+      ) : null}
       <p className="border-t border-line pt-2 text-sm">{info.explain}</p>
       {e.status === "declined" && e.decisionReason ? (
         <p className="text-sm">
@@ -64,6 +75,31 @@ export function EntryCard({ entry: e, currency, refundPercent }: EntryCardProps)
       ) : null}
       {e.canWithdraw ? <WithdrawEntry entry={e} currency={currency} refundPercent={refundPercent} /> : null}
     </li>
+  );
+}
+
+function CategoryLine({ category: c }: { category: EntryCardProps["entry"]["category"] }) {
+  if (!c) return null;
+  const label = c.code !== null && c.name !== null ? { code: c.code, name: c.name } : null;
+  const headline = storedHeadline({ state: c.state, category: label });
+  if (!headline) return null;
+  const reasons = sizeFirst(plainReasons(c.reasons, c.name ?? undefined));
+  return (
+    <div className="text-sm">
+      <p>
+        <span className="font-semibold">Category:</span> {headline.replace(/^In /, "")}
+      </p>
+      {reasons.length ? (
+        <details>
+          <summary className="inline-flex min-h-tap cursor-pointer items-center font-semibold text-brand-strong">Why this category</summary>
+          <ul className="list-disc space-y-1 pl-5 break-words">
+            {reasons.map((r, i) => (
+              <li key={i}>{r}</li>
+            ))}
+          </ul>
+        </details>
+      ) : null}
+    </div>
   );
 }
 

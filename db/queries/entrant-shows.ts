@@ -1,12 +1,12 @@
 // "My entries": the signed-in entrant's entries grouped by show, with what each still needs,
-// what paying the unpaid ones would cost, and the refund a withdrawal would give.
+// the category it is in, what paying the unpaid ones would cost, and the refund a withdrawal would give.
 import "server-only";
 import { asc, desc, eq } from "drizzle-orm";
 import { db } from "@/db/client";
 import { entryFeesPaidCents, memberAt, scheduleOf } from "@/db/queries/payments";
 import { settingsForShowId } from "@/db/queries/settings";
 import { refundIfWithdrawn } from "@/db/queries/withdrawals";
-import { entries, shows } from "@/db/schema";
+import { categories, entries, shows } from "@/db/schema";
 import type { Viewer } from "@/lib/session";
 
 /** What the entrant sees: waiting list is its own state, and a decision shows only once released. */
@@ -17,6 +17,14 @@ export function displayStatusOf(e: { status: string; waitlisted: boolean; paidAt
 }
 
 const WITHDRAWABLE = new Set(["submitted", "paid", "accepted"]);
+
+type CategoryColumns = { categoryState: string; categoryCode: string | null; categoryName: string | null; categoryReasons: string[] };
+
+/** The entry's stored category for its card: state, code and name, and the reasons in plain words. */
+function categoryOf(e: CategoryColumns) {
+  if (e.categoryState === "undecided") return null;
+  return { state: e.categoryState, code: e.categoryCode, name: e.categoryName, reasons: e.categoryReasons };
+}
 
 export async function myEntriesByShow(viewer: Viewer, now = new Date()) {
   const rows = await db
@@ -33,6 +41,11 @@ export async function myEntriesByShow(viewer: Viewer, now = new Date()) {
       paidAt: entries.paidAt,
       paymentReference: entries.paymentReference,
       critiqueRequested: entries.critiqueRequested,
+      categoryState: entries.categoryState,
+      categoryCode: categories.code,
+      categoryName: categories.name,
+      categoryReasons: entries.categoryReasons,
+      waitlistReason: entries.waitlistReason,
       showId: shows.id,
       showSlug: shows.slug,
       showName: shows.name,
@@ -46,6 +59,7 @@ export async function myEntriesByShow(viewer: Viewer, now = new Date()) {
     })
     .from(entries)
     .innerJoin(shows, eq(shows.id, entries.showId))
+    .leftJoin(categories, eq(categories.id, entries.categoryId))
     .where(eq(entries.entrantUserId, viewer.id))
     .orderBy(desc(shows.showOpensAt), asc(shows.name), asc(entries.entryNumber));
 
@@ -70,6 +84,9 @@ export async function myEntriesByShow(viewer: Viewer, now = new Date()) {
             status: displayStatusOf(e),
             decisionReason: e.status === "declined" && e.decisionReleasedAt ? e.decisionReason : "",
             critiqueRequested: e.critiqueRequested,
+            // Drafts are not placed yet; withdrawn and declined entries are out of the show.
+            category: e.status === "draft" || e.status === "withdrawn" || e.status === "declined" ? null : categoryOf(e),
+            waitlistReason: e.waitlisted ? e.waitlistReason : "",
             paid: e.paidAt !== null,
             paidByCard,
             canPay: e.status === "submitted" && !e.waitlisted && e.paidAt === null,

@@ -1,5 +1,5 @@
 // Step 5: the whole entry on one page with a "change" link per step, what is still missing, the
-// show's rules and release, and the send button.
+// category it goes in, the show's rules and release, and the send button.
 import Link from "next/link";
 import type { ReactNode } from "react";
 import { Alert } from "@/components/ui/alert";
@@ -11,6 +11,7 @@ import { PHOTO_VIEW_LABELS, type EntryStep } from "@/scoring/entry-completeness"
 import { perimeterUm } from "@/scoring/measure";
 import { formatCm, formatInches } from "@/scoring/units";
 import { sizeSummary } from "@/components/entries/size-summary";
+import { CategorySummary, type CategorySummaryView } from "@/components/entries/category-summary";
 import { STEP_LABELS } from "./step-nav";
 import { SubmitForm } from "./submit-form";
 
@@ -38,7 +39,7 @@ function Row({ label, children }: { label: string; children: ReactNode }) {
   );
 }
 
-export function ReviewStep({ data }: { data: EntryForForm }) {
+export function ReviewStep({ data, category }: { data: EntryForForm; category: CategorySummaryView | null }) {
   const { entry: e, show, settings, gaps, photos } = data;
   const editable = data.editBlock === null;
   const rules = settings.currentRules;
@@ -71,6 +72,7 @@ export function ReviewStep({ data }: { data: EntryForForm }) {
         <Row label="Size">{size}</Row>
         <Row label="Techniques">{e.techniques.join(", ")}</Row>
       </Section>
+      {category ? <CategorySummary view={category} entryId={e.id} editable={editable} /> : null}
       <Section entryId={e.id} step="makers" editable={editable}>
         <Row label="Made by">{e.madeBy.join(", ")}</Row>
         <Row label="Quilted by">{e.madeBy.length ? quilted : null}</Row>

@@ -1,5 +1,6 @@
 // The entry form, one step at a time (?step=quilt|makers|about|photos|review). Each step saves the
-// draft; once entries close (or the show has the quilt) the entrant reads the review only.
+// draft; once entries close (or the show has the quilt) the entrant reads the review only. The
+// quilt step gets the show's categories to preview the entry's category in the browser.
 import type { Metadata } from "next";
 import Link from "next/link";
 import { ArrowLeft, ArrowRight } from "lucide-react";
@@ -10,10 +11,15 @@ import { ReviewStep } from "@/components/entries/entry-form/review-step";
 import { StepNav, STEP_LABELS } from "@/components/entries/entry-form/step-nav";
 import { EntryStatusBadge } from "@/components/entries/entry-status";
 import { PhotoUploader } from "@/components/entries/photo-uploader";
+import { pendingSteps, savedFactsOf } from "@/components/entries/category-facts";
+import type { CategoryContext } from "@/components/entries/category-preview";
+import { categorySummaryOf, type CategorySummaryView } from "@/components/entries/category-summary";
+import { categoryLabel } from "@/components/entries/category-words";
 import { guardQuery, pageViewer } from "@/components/shell/guard";
 import { Alert } from "@/components/ui/alert";
 import { ButtonLink } from "@/components/ui/button";
 import { PageHeader } from "@/components/ui/page-header";
+import { categoriesForEntryForm, categoryOfEntry } from "@/db/queries/categories";
 import { entryForEntrant, photoUrls, type EntryForForm } from "@/db/queries/entries";
 import { centsForInput } from "@/lib/schemas/entry";
 import { ENTRY_STEPS, PHOTO_VIEW_LABELS, type EntryStep } from "@/scoring/entry-completeness";
@@ -40,6 +46,7 @@ export default async function EntryPage({ params, searchParams }: Props) {
   const back = href(ENTRY_STEPS[at - 1]);
   const next = href(ENTRY_STEPS[at + 1]);
   const { entry } = data;
+  const category = step === "quilt" || step === "review" ? await categoryData(data) : null;
 
   return (
     <div className="mx-auto max-w-3xl space-y-6">
@@ -62,12 +69,39 @@ export default async function EntryPage({ params, searchParams }: Props) {
         <StepNav entryId={id} current={step} gaps={data.gaps} steps={ENTRY_STEPS} />
       )}
       <h2 className="sr-only">{STEP_LABELS[step]}</h2>
-      <StepBody data={data} step={step} back={back} next={next} />
+      <StepBody data={data} step={step} back={back} next={next} category={category} />
     </div>
   );
 }
 
-function StepBody({ data, step, back, next }: { data: EntryForForm; step: EntryStep; back: string; next: string }) {
+type CategoryData = { context: CategoryContext; summary: CategorySummaryView | null };
+
+// entryForEntrant has checked the viewer; the category queries take the ids it returned.
+async function categoryData(data: EntryForForm): Promise<CategoryData> {
+  const [set, stored] = await Promise.all([categoriesForEntryForm(data.show.id), categoryOfEntry(data.entry.id)]);
+  const e = data.entry;
+  const saved = savedFactsOf(e);
+  const pending = pendingSteps(data.gaps);
+  const context: CategoryContext = {
+    categories: set.categories.map(({ id, code, name, description, precedence, conditions, mergedIntoId }) => ({ id, code, name, description, precedence, conditions, mergedIntoId })),
+    overlap: set.overlap,
+    saved,
+    pending,
+    chairPlaced: stored.state === "overridden" && stored.category ? `The chair has placed this quilt in ${categoryLabel(stored.category)}; the rules below no longer move it.` : null,
+  };
+  const summary = categorySummaryOf({
+    draft: e.status === "draft",
+    size: e.widthUm && e.lengthUm ? { widthUm: e.widthUm, lengthUm: e.lengthUm } : null,
+    techniques: e.techniques,
+    saved,
+    pending,
+    set,
+    stored,
+  });
+  return { context, summary };
+}
+
+function StepBody({ data, step, back, next, category }: { data: EntryForForm; step: EntryStep; back: string; next: string; category: CategoryData | null }) {
   const { entry: e, settings } = data;
   if (step === "quilt") {
     const defaults = {
@@ -79,7 +113,7 @@ function StepBody({ data, step, back, next }: { data: EntryForForm; step: EntryS
     };
     // Techniques the chair has since removed stay visible while the entry still has them.
     const techniques = [...new Set([...settings.techniques, ...e.techniques])];
-    return <QuiltStep entryId={e.id} defaults={defaults} techniques={techniques} nextHref={next} />;
+    return <QuiltStep entryId={e.id} defaults={defaults} techniques={techniques} nextHref={next} category={category!.context} />;
   }
   if (step === "makers") {
     const defaults = {
@@ -142,5 +176,5 @@ function StepBody({ data, step, back, next }: { data: EntryForForm; step: EntryS
       </div>
     );
   }
-  return <ReviewStep data={data} />;
+  return <ReviewStep data={data} category={category?.summary ?? null} />;
 }

@@ -1,4 +1,5 @@
-// The intake desk: every entry sent to the show, searchable by number or name.
+// The intake desk: every entry sent to the show, searchable by number or name, each with a
+// Measure form for the size the quilt really has.
 import type { Metadata } from "next";
 import { Inbox } from "lucide-react";
 import { IntakeTable } from "@/components/desk/intake-table";
@@ -19,8 +20,8 @@ export default async function DeskPage({ params }: Props) {
   return (
     <div className="space-y-6">
       <PageHeader eyebrow={list.show.name} title="Intake desk" description="Find a quilt by its entry number or the entrant’s name." />
-      <Alert tone="info" title="Checking quilts in and out comes in a later update.">
-        For now this list shows each entry and where it stands.
+      <Alert tone="info" title="Measuring is here; check-in and claim tickets come later.">
+        Use Measure on an entry to record the size you find. A size off by more than the show allows is flagged for the chair and decides the category.
       </Alert>
       <Alert tone="warning" title="Personal data">
         Entrants’ names are here so you can match quilts to people at the desk. Don’t share or photograph this screen.

@@ -1,0 +1,19 @@
+"use server";
+// The intake desk's actions: recording the size a quilt measures at drop-off.
+import { revalidatePath } from "next/cache";
+import { z } from "zod";
+import { recordMeasurement } from "@/db/queries/categories";
+import { defineAction } from "@/lib/action";
+import { measureSchema } from "@/lib/schemas/categories";
+
+const measureActionSchema = measureSchema.extend({ slug: z.string().trim().min(1).max(120) });
+
+export const measureEntryAction = defineAction(measureActionSchema, async ({ slug, ...input }, viewer) => {
+  const result = await recordMeasurement(viewer, slug, input);
+  revalidatePath(`/shows/${slug}/desk`);
+  const category = result.category ? ` Category: ${result.category}.` : "";
+  return {
+    message: `Entry ${result.entryNumber} measured.${result.flagged ? " Flagged for the chair." : ""}`,
+    data: { ...result, summary: `${result.text}${category}` },
+  };
+});
