@@ -78,7 +78,7 @@ export async function benchResults(databaseUrl: string): Promise<void> {
     const t0 = performance.now();
     const out = createWriteStream(file);
     const written = await writeScoreMatrix(matrixRows(db, showId), await sheetsOf(db, showId), out);
-    await new Promise((r) => out.on("close", r));
+    await new Promise<void>((r) => out.on("close", () => r()));
     const exportMs = performance.now() - t0;
     clearInterval(sampler);
     const mb = (n: number) => (n / 1024 / 1024).toFixed(0);
