@@ -1,5 +1,5 @@
 "use client";
-// The chair's pages within "Manage show": overview, entries, jurying (juried shows), settings.
+// The chair's pages within "Manage show": overview, entries, categories, jurying (juried shows), settings.
 import Link from "next/link";
 import { usePathname } from "next/navigation";
 
@@ -9,6 +9,7 @@ export function ManageTabs({ slug, juried }: { slug: string; juried: boolean }) 
   const links = [
     { href: base, label: "Overview", exact: true },
     { href: `${base}/entries`, label: "Entries" },
+    { href: `${base}/categories`, label: "Categories" },
     ...(juried ? [{ href: `${base}/jurying`, label: "Jurying" }] : []),
     { href: `${base}/settings`, label: "Settings" },
   ];

@@ -6,7 +6,8 @@ import { and, count, desc, eq, ne } from "drizzle-orm";
 import { db, type Tx } from "@/db/client";
 import { entries, showRulesVersions, showSettings, shows, user } from "@/db/schema";
 import { writeAudit } from "@/db/queries/audit";
-import { judgingBlockers } from "@/db/queries/categories";
+import { categorySetFor, judgingBlockers } from "@/db/queries/categories";
+import { activeCategories } from "@/scoring/category-sets";
 import { utcToZonedInput, zonedInputToUtc } from "@/components/format/zoned-time";
 import { badInput, conflict } from "@/lib/errors";
 import {
@@ -160,6 +161,7 @@ export async function publicShowDetails(slug: string) {
     },
     juried: s.juried,
     currentRules: s.currentRules,
+    categories: activeCategories(await categorySetFor(show.id)).map((c) => ({ id: c.id, code: c.code, name: c.name, description: c.description ?? "", conditions: c.conditions })),
   };
 }
 export type PublicShowDetails = NonNullable<Awaited<ReturnType<typeof publicShowDetails>>>;

@@ -8,6 +8,7 @@ import { EnterCallout } from "@/components/shows/enter-callout";
 import { ShowDateList } from "@/components/shows/show-dates";
 import { formatCents } from "@/components/shows/money";
 import { publicShowDetailsFor, publicShowFor } from "@/components/shows/public-show";
+import { ShowCategories } from "@/components/shows/show-categories";
 import { ShowRules } from "@/components/shows/show-rules";
 import { FeeList, LimitList, PhotoRules } from "@/components/shows/show-terms";
 import { ShowStatusBadge } from "@/components/shows/show-status";
@@ -87,6 +88,10 @@ export default async function PublicShowPage({ params }: Props) {
               <LimitList limits={details.limits} />
               <PhotoRules photos={details.photos} juried={details.juried} />
             </div>
+          </Card>
+          <Card aria-labelledby="categories">
+            <CardHeader id="categories" title="Categories" />
+            <ShowCategories categories={details.categories} />
           </Card>
           <Card aria-labelledby="rules">
             <CardHeader id="rules" title="Rules and release" />
