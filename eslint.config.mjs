@@ -6,7 +6,7 @@ import nextTs from "eslint-config-next/typescript";
 export default defineConfig([
   ...nextVitals,
   ...nextTs,
-  globalIgnores([".next/**", ".next-dev-*/**", ".data/**", "node_modules/**", "next-env.d.ts", "db/migrations/**", "tests/artifacts/**"]),
+  globalIgnores([".next/**", ".next-dev-*/**", ".next-sw-*/**", "public/sw.js", ".data/**", "node_modules/**", "next-env.d.ts", "db/migrations/**", "tests/artifacts/**"]),
   {
     rules: {
       "@typescript-eslint/no-unused-vars": ["error", { argsIgnorePattern: "^_", varsIgnorePattern: "^_" }],

@@ -10,6 +10,9 @@ import { DEMO_ACCOUNTS, DEMO_PASSWORD } from "../db/seed/demo-data";
 import type { Services } from "./services";
 import { ensureDatabase, must, NEXT, profileEnv, recreateDatabase, ROOT, run, say, serve, startAll, waitForHealth, type Env } from "./lib/app";
 
+// The offline worker (app/sw.ts) is built from the finished Next build (serwist.config.mjs).
+const SERWIST = path.join(ROOT, "node_modules/@serwist/cli/cli.js");
+
 function banner(env: Env, services: Services) {
   const lines = [
     "",
@@ -49,6 +52,7 @@ async function start(dev: boolean) {
     app = spawn(process.execPath, [NEXT, "dev", "-p", env.PORT!], { cwd: ROOT, env: { ...process.env, ...env }, stdio: "inherit" });
   } else {
     await must("next build", process.execPath, [NEXT, "build"], env);
+    await must("serwist build", process.execPath, [SERWIST, "build", "serwist.config.mjs"], env);
     app = serve(env, env.PORT!);
   }
   await waitForHealth(`http://127.0.0.1:${env.PORT}`, 180_000);
@@ -103,6 +107,7 @@ async function test(args: string[]) {
     if (!only || only === "e2e") {
       say("building the app for the browser tests");
       await must("next build", process.execPath, [NEXT, "build"], env);
+      await must("serwist build", process.execPath, [SERWIST, "build", "serwist.config.mjs"], env);
       await must("seeding the demo show", "npx", ["tsx", "scripts/seed.ts"], env);
       // Browser tests sign in many times from one address; the limit itself is tested in vitest.
       app = serve({ ...env, AUTH_SIGN_IN_LIMIT_PER_MINUTE: "1000" }, env.PORT!, "127.0.0.1");

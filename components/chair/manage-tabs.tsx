@@ -10,6 +10,7 @@ export function ManageTabs({ slug, juried }: { slug: string; juried: boolean }) 
     { href: base, label: "Overview", exact: true },
     { href: `${base}/entries`, label: "Entries" },
     { href: `${base}/categories`, label: "Categories" },
+    { href: `${base}/judging`, label: "Judging" },
     ...(juried ? [{ href: `${base}/jurying`, label: "Jurying" }] : []),
     { href: `${base}/settings`, label: "Settings" },
   ];

@@ -302,5 +302,18 @@ export async function progressBoard(viewer: Viewer, slug: string, now: Date = ne
     categories: [...byCategory].map(([id, t]) => ({ id, name: catName.get(id) ?? "?", ...t })),
     judges: [...byJudge].map(([id, t]) => ({ id, name: judgeName.get(id) ?? "?", ...t })),
     unassigned: setup.categories.filter((c) => !setup.panels.some((p) => p.categoryIds.includes(c.id))).map((c) => `${c.code} ${c.name}`),
+    sheets: await sheetsForBoard(showId),
   };
+}
+
+/** Every judge's sheet by entry, for the chair's Reopen and History (chair only: the caller checked). */
+async function sheetsForBoard(showId: string) {
+  const rows = await db
+    .select({ id: judgeSheets.id, entryId: judgeSheets.entryId, entryNumber: entries.entryNumber, title: entries.title, categoryId: entries.categoryId, judgeUserId: judgeSheets.judgeUserId, judgeName: user.name, status: judgeSheets.status, total: judgeSheets.total, submittedAt: judgeSheets.submittedAt, reopenedAt: judgeSheets.reopenedAt, reopenReason: judgeSheets.reopenReason })
+    .from(judgeSheets)
+    .innerJoin(entries, eq(entries.id, judgeSheets.entryId))
+    .innerJoin(user, eq(user.id, judgeSheets.judgeUserId))
+    .where(eq(judgeSheets.showId, showId))
+    .orderBy(asc(entries.entryNumber), asc(user.name));
+  return rows.map(({ total, ...r }) => ({ ...r, total: (total as { total?: number | null } | null)?.total ?? null }));
 }

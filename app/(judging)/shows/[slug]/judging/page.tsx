@@ -1,10 +1,11 @@
-// The judging area for judges and scribes: the entries to judge, by number, with no names.
+// The judging tablet for judges and scribes. The layout has checked the role; the query checks it
+// again. Everything else is the client (components/judging/judging-app.tsx), which works from the
+// tablet's own copy of the session so the page also opens and scores without a network.
 import type { Metadata } from "next";
-import { Gavel } from "lucide-react";
+import { JudgingApp } from "@/components/judging/judging-app";
 import { JudgingQueue } from "@/components/judging/judging-queue";
+import { RegisterWorker } from "@/components/judging/register-worker";
 import { guardQuery, pageViewer } from "@/components/shell/guard";
-import { Alert } from "@/components/ui/alert";
-import { EmptyState } from "@/components/ui/empty-state";
 import { PageHeader } from "@/components/ui/page-header";
 import { judgingQueue } from "@/db/queries/judging";
 
@@ -16,25 +17,12 @@ export default async function JudgingPage({ params }: Props) {
   const { slug } = await params;
   const viewer = await pageViewer();
   const queue = await guardQuery(judgingQueue(viewer, slug));
-  const count = queue.entries.length;
 
   return (
     <div className="space-y-6">
-      <PageHeader
-        eyebrow={queue.show.name}
-        title="Judging"
-        description={count ? `${count} ${count === 1 ? "quilt" : "quilts"} to judge, in entry-number order. Judging is blind: no maker names appear here.` : undefined}
-      />
-      <Alert tone="info" title="Score sheets will appear here once the chair opens judging.">
-        Until then, this list lets you see what is coming.
-      </Alert>
-      {count ? (
-        <JudgingQueue entries={queue.entries} />
-      ) : (
-        <EmptyState icon={Gavel} title="No quilts to judge yet">
-          Quilts join this list once they are numbered and entered for judging.
-        </EmptyState>
-      )}
+      <RegisterWorker />
+      <PageHeader eyebrow={queue.show.name} title="Judging" description="Judging is blind: entry numbers and the quilt's own facts only, no maker names." />
+      <JudgingApp slug={queue.show.slug} notOnPanel={queue.entries.length ? <JudgingQueue entries={queue.entries} /> : null} />
     </div>
   );
 }
