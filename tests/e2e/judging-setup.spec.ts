@@ -24,7 +24,7 @@ async function fitsTablet(page: Page) {
 }
 
 test("the chair sets up judging, is refused a conflicting panel with the reason, fixes it and sees the progress board", async ({ page }) => {
-  test.setTimeout(240_000); // a long journey on a 2-core machine // a dev server compiles each page on its first visit
+  test.setTimeout(240_000); // a long journey on a 2-core machine
   await page.setViewportSize(VIEWPORTS.desktop);
   await signIn(page, "chair@ribbonry.test");
   await page.goto(`/shows/${show.slug}/manage`);
