@@ -186,7 +186,7 @@ describe("syncing sheet changes", () => {
 
     await reopenJudgeSheet(await viewerOf(chair), show.slug, { sheetId: row.id, reason: "judge asked to revisit" });
     expect((await sheetRow(e))!.status).toBe("open");
-    const audit = await db.select().from(auditLog).where(eq(auditLog.subjectId, row.id));
+    const audit = await db.select().from(auditLog).where(eq(auditLog.subjectId, row.id)).orderBy(auditLog.id);
     expect(audit.map((a) => a.action)).toEqual(["judge_sheet.submitted", "judge_sheet.reopened"]);
   });
 
@@ -210,6 +210,16 @@ describe("syncing sheet changes", () => {
       status: 409,
       message: "Judging hasn't started at this show yet; changes stay on this device until it does.",
     });
+  });
+
+  it("the sync route's answers carry no name, e-mail, phone or guild either (judge and scribe)", async () => {
+    for (const [u, device] of [[judge, "tab-juniper-0001"], [scribe, "tab-sorrel-0002"]] as const) {
+      const body = batchOf(device, judge.id, [mark(entryIds[5]!, "colour", 11), { kind: "set", key: key(), entryId: entryIds[5]!, seq: ++seq, field: "comment:overall", value: "Even binding.", baseVersion: 0 }]);
+      const res = await syncRoute(new Request(`http://t/api/shows/${show.slug}/judging/sync`, { method: "POST", headers: { cookie: u.cookie, "content-type": "application/json" }, body: JSON.stringify(body) }), { params: Promise.resolve({ slug: show.slug }) });
+      expect(res.status).toBe(200);
+      const text = await res.text();
+      for (const secret of SECRETS) expect(text, `${u.name}'s sync answer mentions ${secret}`).not.toContain(secret);
+    }
   });
 
   it("answers a bad batch at the route with 400 and field errors", async () => {
