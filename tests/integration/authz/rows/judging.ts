@@ -3,7 +3,7 @@
 import { db } from "@/db/client";
 import { judgingPanels, panelMembers } from "@/db/schema";
 import { grantRole, makeShow } from "../../../helpers/factories";
-import { only, type Case, type World } from "../table";
+import { everyone, only, type Case, type World } from "../table";
 
 const seated = new WeakMap<World, Promise<string>>();
 
@@ -41,5 +41,7 @@ export const routes: Record<string, Case> = {
       return { params: { slug }, body: { deviceId: `device-${role}-0001`, forJudge, changes: [] } };
     },
   },
+  // The installable judging screen's manifest names only the page's address: public.
+  "GET /api/shows/[slug]/judging/manifest": { expect: everyone(200), request: async (w) => ({ params: { slug: w.show.slug } }) },
   "GET /api/shows/[slug]/judging/progress": { expect: only({ chair: 200 }), request: async (w) => ({ params: { slug: w.show.slug } }) },
 };

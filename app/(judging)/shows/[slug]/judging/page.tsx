@@ -11,7 +11,11 @@ import { judgingQueue } from "@/db/queries/judging";
 
 type Props = { params: Promise<{ slug: string }> };
 
-export const metadata: Metadata = { title: "Judging" };
+// Installed from here, the app opens on this show's judging page (app/api/…/judging/manifest).
+export async function generateMetadata({ params }: Props): Promise<Metadata> {
+  const { slug } = await params;
+  return { title: "Judging", manifest: `/api/shows/${encodeURIComponent(slug)}/judging/manifest` };
+}
 
 export default async function JudgingPage({ params }: Props) {
   const { slug } = await params;
