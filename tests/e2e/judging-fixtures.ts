@@ -59,11 +59,11 @@ export async function makeJudgingShow(prefix: string, count = 6): Promise<Judgin
           returning id`;
         entries.push({ id: e!.id, entryNumber: 100 + i });
       }
-      // Photos: rows pointing at versions the demo seed already stored (storage_key is unique,
-      // so the copy gets its own; only web_key and thumb_key are served).
+      // Photos: rows pointing at images the demo seed stored (its rows keep only storage_key, so
+      // that key serves every size; storage_key is unique, so the copy gets its own).
       const stored = await tx<{ view: string; webKey: string; thumbKey: string; widthPx: number; heightPx: number; bytes: number; contentType: string }[]>`
-        select view, web_key as "webKey", thumb_key as "thumbKey", width_px as "widthPx", height_px as "heightPx", bytes, content_type as "contentType"
-        from entry_photos where web_key like 'shows/%' and thumb_key like 'shows/%' order by created_at limit ${count * 2}`;
+        select view, coalesce(web_key, storage_key) as "webKey", coalesce(thumb_key, storage_key) as "thumbKey", width_px as "widthPx", height_px as "heightPx", bytes, content_type as "contentType"
+        from entry_photos where storage_key like 'shows/%' order by created_at, id limit ${count * 2}`;
       for (const [i, p] of stored.entries()) {
         const entry = entries[Math.floor(i / 2)];
         if (!entry) break;
