@@ -1,5 +1,6 @@
 // The chair's judging set-up: score sheets, each category's method and sheet, panels, the people
 // judges must not judge, and the judging options. Each part saves on its own.
+import { SectionLinks } from "@/components/ui/section-links";
 import type { Metadata } from "next";
 import Link from "next/link";
 import { Activity, ArrowLeft } from "lucide-react";
@@ -46,17 +47,7 @@ export default async function JudgingSetupPage({ params }: Props) {
           </ButtonLink>
         }
       />
-      <nav aria-label="Judging sections">
-        <ul className="flex flex-wrap gap-2">
-          {SECTIONS.map(([id, label]) => (
-            <li key={id}>
-              <a href={`#${id}`} className="inline-flex min-h-tap items-center rounded-control border border-line bg-surface px-3 no-underline hover:bg-plum-50">
-                {label}
-              </a>
-            </li>
-          ))}
-        </ul>
-      </nav>
+      <SectionLinks label="Judging sections" sections={SECTIONS} />
 
       <Card aria-labelledby="sheets">
         <CardHeader id="sheets" title="Score sheets" description="Sections of criteria, each with its most points; the usual sheet adds up to 100." />

@@ -1,5 +1,6 @@
 // The chair's settings for one show: dates, fees, limits, photos, options, rules versions and
 // the show's stage. Each section saves on its own, so a bad value in one never loses another.
+import { SectionLinks } from "@/components/ui/section-links";
 import type { Metadata } from "next";
 import Link from "next/link";
 import { ArrowLeft, CircleCheck, CircleDashed } from "lucide-react";
@@ -56,17 +57,7 @@ export default async function ShowSettingsPage({ params }: Props) {
           The values below are Ribbonry’s starting values; saving any section keeps them for this show.
         </Alert>
       )}
-      <nav aria-label="Settings sections">
-        <ul className="flex flex-wrap gap-2">
-          {SECTIONS.map(([id, label]) => (
-            <li key={id}>
-              <a href={`#${id}`} className="inline-flex min-h-tap items-center rounded-control border border-line bg-surface px-3 no-underline hover:bg-plum-50">
-                {label}
-              </a>
-            </li>
-          ))}
-        </ul>
-      </nav>
+      <SectionLinks label="Settings sections" sections={SECTIONS} />
 
       <Card aria-labelledby="status">
         <CardHeader id="status" title="Stage" description="Where the show stands. Entrants see it on the public page." />
