@@ -19,6 +19,8 @@
 //    when another device wrote a field after this device last saw it. A locked sheet refuses
 //    every change until the chair reopens it.
 
+import type { Mark } from "./score-sheets";
+
 export type FieldKey = string;
 export type Json = null | boolean | number | string | Json[] | { [k: string]: Json };
 
@@ -144,3 +146,8 @@ export const OVERALL_COMMENT_FIELD = "comment:overall";
 export const DISCUSS_FIELD = "discuss";
 export const SORT_FIELD = "sort";
 export const RANK_FIELD = "rank";
+
+/** The marks of a sheet's state, by criterion id (cleared marks left out). */
+export function marksOfState(state: SheetState): Record<string, Mark | undefined> {
+  return Object.fromEntries(Object.entries(state.fields).filter(([k, f]) => k.startsWith("mark:") && f.value !== null).map(([k, f]) => [k.slice(5), f.value as Mark]));
+}

@@ -12,7 +12,7 @@ import { conflict, forbiddenError } from "@/lib/errors";
 import type { SyncBatch } from "@/lib/schemas/judging";
 import { AREA_ROLES, requireShowRole, type Viewer } from "@/lib/session";
 import { sheetTotal, validateMark, type Criterion, type Mark, type ScoreSheet } from "@/scoring/score-sheets";
-import { applyBatch, emptySheet, type ChangeOutcome, type Json, type SheetChange, type SheetState } from "@/scoring/sheet-sync";
+import { applyBatch, emptySheet, marksOfState, type ChangeOutcome, type Json, type SheetChange, type SheetState } from "@/scoring/sheet-sync";
 import { formatSize } from "@/scoring/units";
 
 /** The list page's view: entries to be judged at the show, by number. */
@@ -193,9 +193,7 @@ function invalidValue(change: SyncBatch["changes"][number], sheet: ScoreSheet | 
   return "Unknown field.";
 }
 
-function marksOf(state: SheetState): Record<string, Mark | undefined> {
-  return Object.fromEntries(Object.entries(state.fields).filter(([k, f]) => k.startsWith("mark:") && f.value !== null).map(([k, f]) => [k.slice(5), f.value as Mark]));
-}
+const marksOf = marksOfState;
 
 export type SyncResult = {
   results: { key: string; entryId: string; outcome: ChangeOutcome; duplicate: boolean }[];

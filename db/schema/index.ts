@@ -5,6 +5,7 @@ export * from "./settings";
 export * from "./people";
 export * from "./categories";
 export * from "./judging";
+export * from "./results";
 export * from "./entries";
 export * from "./payments";
 export * from "./audit";

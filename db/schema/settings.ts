@@ -1,6 +1,7 @@
 // What a chair sets for a show: fees, limits, photo requirements, and the versioned rules and
 // release text entrants accept. One settings row per show; every rules version is kept.
-import { boolean, integer, pgTable, text, timestamp, uniqueIndex, uuid } from "drizzle-orm/pg-core";
+import { boolean, integer, jsonb, pgTable, text, timestamp, uniqueIndex, uuid } from "drizzle-orm/pg-core";
+import type { ResultRules } from "../../scoring/results";
 import { sql } from "drizzle-orm";
 import { user } from "./auth";
 import { shows } from "./shows";
@@ -47,6 +48,8 @@ export const showSettings = pgTable("show_settings", {
   quickPhrases: text().array().notNull().default(sql`'{}'::text[]`),
   /** What judges see of an entry besides its number, photos and category (never who made it). */
   judgeFields: text().array().notNull().default(sql`'{title,size,techniques,quiltingMethod,pattern}'::text[]`),
+  /** How results are ranked and placed, and the ribbons; null = the defaults of scoring/results.ts. */
+  resultRules: jsonb().$type<ResultRules>(),
   updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
 });
 

@@ -6,7 +6,7 @@ import { beforeAll, describe, expect, it } from "vitest";
 import { mean, median, sampleStandardDeviation, standardDeviation } from "simple-statistics";
 import { db } from "@/db/client";
 import { judgeSheets, judgingPanels, panelCategories, panelMembers } from "@/db/schema";
-import { proposedResults, totalsInJs, totalsInSql } from "@/db/queries/results";
+import { resultsReview, totalsInJs, totalsInSql } from "@/db/queries/results";
 import { emptySheet } from "@/scoring/sheet-sync";
 import { grantRole, makeCategory, makeEntry, makeShow, makeUser } from "../../helpers/factories";
 import { viewerOf } from "../entries/helpers";
@@ -112,8 +112,11 @@ describe("proposed results", () => {
       await sheet(show.id, e.id, a.id, x);
       if (y !== null) await sheet(show.id, e.id, b.id, y);
     }
-    const [result] = await proposedResults(await viewerOf(chair), show.slug);
-    expect(result!.entries.map((e) => [e.score, e.displayRank])).toEqual([[91, "=1"], [91, "=1"], [82, "3"], [70, "4"]]);
+    const review = await resultsReview(await viewerOf(chair), show.slug);
+    const [result] = review.results.categories;
+    // Each judge placed a different one of the 91s first, so the first-place votes leave them tied.
+    expect(result!.entries.map((e) => [e.score, e.ranked.displayRank, e.placeLabel])).toEqual([[91, "=1", "1st"], [91, "=1", "1st"], [82, "3", "2nd"], [70, "4", null]]);
     expect(result!.missing).toEqual([{ entryNumber: expect.any(Number), judge: "Judge Birch" }]);
+    expect(review.results.blockers.join(" ")).toMatch(/1 sheet not submitted/);
   });
 });
