@@ -16,6 +16,7 @@ export function StatusForm({ showSlug, status, moves }: Props) {
     defaultValues: { status: moves[0] ?? status },
     action: (values): Promise<ActionResult> => changeStatusAction(null, { ...values, showSlug }),
   });
+  if (status === "judging") return <p className="text-ink-muted">Judging is under way. The results go out from <a href={`/shows/${showSlug}/manage/results`}>Results</a>, which checks every sheet first.</p>;
   if (moves.length === 0) return <p className="text-ink-muted">This show is finished; its stage no longer changes.</p>;
   return (
     <ActionForm controller={ctl} aria-labelledby="status">

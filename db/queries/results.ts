@@ -106,7 +106,7 @@ export async function resultsReview(viewer: Viewer, slug: string) {
   const { showId } = await requireShowRole(viewer, slug, ["chair"]);
   const [{ input, sections, pickRows }, [show], publications, judges] = await Promise.all([
     loadResultsInput(db, showId),
-    db.select({ id: shows.id, name: shows.name, slug: shows.slug, status: shows.status }).from(shows).where(eq(shows.id, showId)),
+    db.select({ id: shows.id, name: shows.name, slug: shows.slug, status: shows.status, timeZone: shows.timeZone }).from(shows).where(eq(shows.id, showId)),
     db.select({ id: resultPublications.id, version: resultPublications.version, reason: resultPublications.reason, publishedAt: resultPublications.publishedAt, unpublishedAt: resultPublications.unpublishedAt, unpublishReason: resultPublications.unpublishReason }).from(resultPublications).where(eq(resultPublications.showId, showId)).orderBy(desc(resultPublications.version)),
     db.selectDistinct({ id: user.id, name: user.name }).from(panelMembers).innerJoin(judgingPanels, eq(judgingPanels.id, panelMembers.panelId)).innerJoin(user, eq(user.id, panelMembers.userId)).where(and(eq(judgingPanels.showId, showId), eq(panelMembers.role, "judge"))).orderBy(asc(user.name)),
   ]);

@@ -301,6 +301,7 @@ export async function changeShowStatus(viewer: Viewer, slug: string, input: Stat
     const to = input.status;
     const reasons: string[] = [];
     if (from === to) reasons.push(`The show is already ${STATUS_WORDS[to]}.`);
+    else if (to === "results_published" || (from === "results_published" && to === "judging")) reasons.push("Publish or unpublish the results from Results, which checks every sheet first.");
     else if (!STATUS_MOVES[from].includes(to)) {
       const allowed = STATUS_MOVES[from].map((s) => `“${STATUS_WORDS[s]}”`).join(" or ");
       reasons.push(`A show ${STATUS_WORDS[from]} can't move to “${STATUS_WORDS[to]}”${allowed ? `; it can move to ${allowed}` : ""}.`);

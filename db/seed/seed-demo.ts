@@ -10,7 +10,7 @@ import * as schema from "../schema";
 import { photoSizeFor, renderPatchwork, type PatchworkView } from "../../storage/patchwork";
 import { factsOf, placeEntry, prepareSet, type ShowCategory } from "../../scoring/category-sets";
 import { GUILD_STARTER } from "../../scoring/starter-sets";
-import { DEMO_PANELS, DEMO_QUICK_PHRASES, DEMO_SHEET } from "./demo-judging";
+import { DEMO_AWARDS, DEMO_PANELS, DEMO_QUICK_PHRASES, DEMO_RESULT_RULES, DEMO_SHEET } from "./demo-judging";
 import { DEMO_PASSWORD, DEMO_RULES, DEMO_SETTINGS, demoScenario, type DemoQuilt, type DemoShowRole } from "./demo-data";
 
 /**
@@ -191,7 +191,7 @@ export async function seedDemo(opts: SeedDemoOptions): Promise<{ created: boolea
     await tx.insert(schema.entrantProfiles).values(profiles);
     await tx.insert(schema.shows).values(showRow);
     await tx.insert(schema.showRoles).values(roles);
-    await tx.insert(schema.showSettings).values({ showId, ...DEMO_SETTINGS, lateFeeFromAt: new Date(DEMO_SETTINGS.lateFeeFromAt), quickPhrases: DEMO_QUICK_PHRASES });
+    await tx.insert(schema.showSettings).values({ showId, ...DEMO_SETTINGS, lateFeeFromAt: new Date(DEMO_SETTINGS.lateFeeFromAt), quickPhrases: DEMO_QUICK_PHRASES, resultRules: DEMO_RESULT_RULES });
     await tx.insert(schema.showRulesVersions).values({ id: rulesVersionId, showId, version: 1, ...DEMO_RULES, publishedBy: chairId, publishedAt: showCreatedAt });
     const lastNumber = Math.max(100, ...entryRows.map((e) => e.entryNumber ?? 0));
     await tx.insert(schema.showEntryCounters).values({ showId, lastNumber });
@@ -207,6 +207,10 @@ export async function seedDemo(opts: SeedDemoOptions): Promise<{ created: boolea
       ]);
       await tx.insert(schema.panelCategories).values(p.categoryCodes.map((code) => ({ panelId: panel!.id, categoryId: codeToId.get(code)! })));
     }
+    const awardRows = await tx.insert(schema.showAwards).values(DEMO_AWARDS.map((a, i) => ({ showId, ...a, sponsor: a.sponsor ?? "", sortOrder: i, createdAt: showCreatedAt }))).returning({ id: schema.showAwards.id, kind: schema.showAwards.kind });
+    // Any two of the demo awards may go to the same entry.
+    const ids = awardRows.map((a) => a.id);
+    for (const a of awardRows) await tx.update(schema.showAwards).set({ combinesWith: ids.filter((id) => id !== a.id) }).where(eq(schema.showAwards.id, a.id));
     log(`rows written for ${users.length} people and ${entryRows.length} entries; rendering ${photoJobs.length} photos`);
 
     // Upload inside the transaction: if any upload fails, the rows roll back with it. Objects

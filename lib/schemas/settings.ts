@@ -264,7 +264,8 @@ export const STATUS_MOVES: Record<ShowStatusValue, readonly ShowStatusValue[]> =
   draft: ["entries_open"],
   entries_open: ["entries_closed"],
   entries_closed: ["entries_open", "judging"],
-  judging: ["results_published"],
+  // Results go out (and come down) from the Results page, which checks every sheet first.
+  judging: [],
   results_published: ["archived"],
   archived: [],
 };
