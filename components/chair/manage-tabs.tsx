@@ -1,5 +1,5 @@
 "use client";
-// The chair's pages within "Manage show": overview, entries, categories, jurying (juried shows), settings.
+// The chair's pages within "Manage show": overview, entries, categories, judging, results, jurying (juried shows), settings.
 import Link from "next/link";
 import { usePathname } from "next/navigation";
 
@@ -11,6 +11,7 @@ export function ManageTabs({ slug, juried }: { slug: string; juried: boolean }) 
     { href: `${base}/entries`, label: "Entries" },
     { href: `${base}/categories`, label: "Categories" },
     { href: `${base}/judging`, label: "Judging" },
+    { href: `${base}/results`, label: "Results" },
     ...(juried ? [{ href: `${base}/jurying`, label: "Jurying" }] : []),
     { href: `${base}/settings`, label: "Settings" },
   ];

@@ -1,0 +1,73 @@
+"use client";
+// Publishing: what still blocks it, then Publish (a reason when publishing again); once out,
+// Unpublish with a reason. Every publication is listed with its reasons.
+import { Megaphone, Undo2 } from "lucide-react";
+import { ActionForm, useActionForm } from "@/components/forms/action-form";
+import { formatDateTime } from "@/components/format/dates";
+import { Alert } from "@/components/ui/alert";
+import { Button } from "@/components/ui/button";
+import { TextareaField } from "@/components/ui/field";
+import { publishSchema, unpublishSchema } from "@/lib/schemas/results";
+import { publishResultsAction, unpublishResultsAction } from "@/app/(chair)/shows/[slug]/manage/results/actions";
+
+type Publication = { id: string; version: number; reason: string; publishedAt: Date; unpublishedAt: Date | null; unpublishReason: string };
+type Props = { showSlug: string; timeZone: string; status: string; blockers: string[]; warnings: string[]; publications: Publication[]; current: Publication | null };
+
+export function PublishPanel({ showSlug, timeZone, status, blockers, warnings, publications, current }: Props) {
+  return (
+    <div className="space-y-4">
+      {current ? (
+        <Alert tone="success" title={`Version ${current.version} is published`}>
+          The public results page and each entrant&apos;s results and judges&apos; comments are visible. <a href={`/shows/${showSlug}/results`}>Open the public results page</a>.
+        </Alert>
+      ) : status !== "judging" ? (
+        <Alert tone="info" title="Not yet">Results can be reviewed and published once the show is at judging.</Alert>
+      ) : blockers.length ? (
+        <Alert tone="warning" title="Before you can publish">
+          <ul className="list-disc space-y-1 pl-5">{blockers.map((b) => <li key={b}>{b}</li>)}</ul>
+        </Alert>
+      ) : (
+        <Alert tone="info" title="Ready to publish">Nothing blocks publishing. The public results page shows the ribbons once you publish.</Alert>
+      )}
+      {warnings.length ? <Alert tone="warning" title="Worth a look"><ul className="list-disc pl-5">{warnings.map((w) => <li key={w}>{w}</li>)}</ul></Alert> : null}
+      {current ? <UnpublishForm showSlug={showSlug} /> : status === "judging" ? <PublishForm showSlug={showSlug} again={publications.length > 0} blocked={blockers.length > 0} /> : null}
+      {publications.length ? (
+        <div>
+          <h3 className="text-lg">Publications</h3>
+          <ul className="mt-1 space-y-1 text-sm">
+            {publications.map((p) => (
+              <li key={p.id}>
+                Version {p.version}: published {formatDateTime(p.publishedAt, timeZone)}{p.reason ? ` (“${p.reason}”)` : ""}
+                {p.unpublishedAt ? `; taken down ${formatDateTime(p.unpublishedAt, timeZone)} (“${p.unpublishReason}”)` : "; current"}
+              </li>
+            ))}
+          </ul>
+        </div>
+      ) : null}
+    </div>
+  );
+}
+
+function PublishForm({ showSlug, again, blocked }: { showSlug: string; again: boolean; blocked: boolean }) {
+  const ctl = useActionForm({ schema: publishSchema, defaultValues: { reason: "" }, action: (v) => publishResultsAction(null, { ...v, showSlug }) });
+  return (
+    <ActionForm controller={ctl} aria-label="Publish the results" className="space-y-3">
+      {again ? <TextareaField label="Why publish again?" hint="Required; it goes in the audit log and in the mail to entrants whose results changed." rows={2} error={ctl.errorOf("reason")} {...ctl.form.register("reason")} /> : null}
+      <Button type="submit" size="lg" disabled={blocked} pending={ctl.pending} pendingLabel="Publishing…" icon={<Megaphone aria-hidden className="size-5" />}>
+        {again ? "Publish again" : "Publish the results"}
+      </Button>
+    </ActionForm>
+  );
+}
+
+function UnpublishForm({ showSlug }: { showSlug: string }) {
+  const ctl = useActionForm({ schema: unpublishSchema, defaultValues: { reason: "" }, action: (v) => unpublishResultsAction(null, { ...v, showSlug }) });
+  return (
+    <ActionForm controller={ctl} aria-label="Unpublish the results" className="space-y-3 rounded-control border border-line bg-paper-50 p-3">
+      <TextareaField label="Reason to take the results down" hint="Required and audited. The public page and entrants see nothing until you publish again." rows={2} error={ctl.errorOf("reason")} {...ctl.form.register("reason")} />
+      <Button type="submit" variant="danger" pending={ctl.pending} pendingLabel="Taking down…" icon={<Undo2 aria-hidden className="size-5" />}>
+        Unpublish
+      </Button>
+    </ActionForm>
+  );
+}
