@@ -2,7 +2,7 @@
 // section and sheet totals (N/A rescaled) and the judge's comments. Only this entry's data goes
 // in; the caller sends it only after results are published. pdfkit's built-in Helvetica metrics
 // ship inside the npm package, so nothing is fetched.
-import type { Writable } from "node:stream";
+import { PassThrough, type Writable } from "node:stream";
 import PDFDocument from "pdfkit";
 import { formatScore, markPoints, sheetTotal, type Mark, type ScoreSheet } from "../scoring/score-sheets";
 
@@ -83,4 +83,13 @@ export function writeCritique(data: CritiqueData, out: Writable): Promise<void> 
   if (!data.judges.length) doc.font("Helvetica").fontSize(12).text(`Entry ${data.entryNumber}: no judge's sheet to show.`);
   doc.end();
   return done;
+}
+
+/** The whole critique PDF in memory (for a download or a mail attachment). */
+export async function critiqueBytes(data: CritiqueData): Promise<Buffer> {
+  const out = new PassThrough();
+  const chunks: Buffer[] = [];
+  out.on("data", (c: Buffer) => chunks.push(c));
+  await writeCritique(data, out);
+  return Buffer.concat(chunks);
 }

@@ -18,6 +18,7 @@ export type Mail = {
   html: string;
   replyTo?: string;
   fromName?: string;
+  attachments?: { filename: string; content: Buffer; contentType: string }[];
 };
 
 export async function sendMail(mail: Mail): Promise<void> {

@@ -1,19 +1,21 @@
 "use client";
 // Publishing: what still blocks it, then Publish (a reason when publishing again); once out,
 // Unpublish with a reason. Every publication is listed with its reasons.
-import { Megaphone, Undo2 } from "lucide-react";
+import { Mail, Megaphone, Undo2 } from "lucide-react";
 import { ActionForm, useActionForm } from "@/components/forms/action-form";
 import { formatDateTime } from "@/components/format/dates";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { TextareaField } from "@/components/ui/field";
 import { publishSchema, unpublishSchema } from "@/lib/schemas/results";
-import { publishResultsAction, unpublishResultsAction } from "@/app/(chair)/shows/[slug]/manage/results/actions";
+import { z } from "zod";
+import { publishResultsAction, resendResultMailsAction, unpublishResultsAction } from "@/app/(chair)/shows/[slug]/manage/results/actions";
 
 type Publication = { id: string; version: number; reason: string; publishedAt: Date; unpublishedAt: Date | null; unpublishReason: string };
-type Props = { showSlug: string; timeZone: string; status: string; blockers: string[]; warnings: string[]; publications: Publication[]; current: Publication | null };
+type MailStatus = { sent: number; failed: number; lastError: string } | null;
+type Props = { showSlug: string; timeZone: string; status: string; blockers: string[]; warnings: string[]; publications: Publication[]; current: Publication | null; mailStatus: MailStatus };
 
-export function PublishPanel({ showSlug, timeZone, status, blockers, warnings, publications, current }: Props) {
+export function PublishPanel({ showSlug, timeZone, status, blockers, warnings, publications, current, mailStatus }: Props) {
   return (
     <div className="space-y-4">
       {current ? (
@@ -30,6 +32,7 @@ export function PublishPanel({ showSlug, timeZone, status, blockers, warnings, p
         <Alert tone="info" title="Ready to publish">Nothing blocks publishing. The public results page shows the ribbons once you publish.</Alert>
       )}
       {warnings.length ? <Alert tone="warning" title="Worth a look"><ul className="list-disc pl-5">{warnings.map((w) => <li key={w}>{w}</li>)}</ul></Alert> : null}
+      {current && mailStatus ? <MailLine showSlug={showSlug} status={mailStatus} /> : null}
       {current ? <UnpublishForm showSlug={showSlug} /> : status === "judging" ? <PublishForm showSlug={showSlug} again={publications.length > 0} blocked={blockers.length > 0} /> : null}
       {publications.length ? (
         <div>
@@ -67,6 +70,22 @@ function UnpublishForm({ showSlug }: { showSlug: string }) {
       <TextareaField label="Reason to take the results down" hint="Required and audited. The public page and entrants see nothing until you publish again." rows={2} error={ctl.errorOf("reason")} {...ctl.form.register("reason")} />
       <Button type="submit" variant="danger" pending={ctl.pending} pendingLabel="Taking down…" icon={<Undo2 aria-hidden className="size-5" />}>
         Unpublish
+      </Button>
+    </ActionForm>
+  );
+}
+
+function MailLine({ showSlug, status }: { showSlug: string; status: NonNullable<MailStatus> }) {
+  const ctl = useActionForm({ schema: z.object({}), defaultValues: {}, action: () => resendResultMailsAction(null, { showSlug }) });
+  return (
+    <ActionForm controller={ctl} aria-label="Results mails" className="flex flex-wrap items-center gap-3">
+      <p className="text-sm">
+        Results mail: {status.sent} sent{status.failed ? `, ${status.failed} not sent` : ""}.
+        {status.failed && status.lastError ? <span className="block text-ink-muted">Last error: {status.lastError}</span> : null}
+      </p>
+      {/* Safe to press at any time: only entrants who have not had this version's mail get one. */}
+      <Button type="submit" variant="secondary" pending={ctl.pending} pendingLabel="Sending…" icon={<Mail aria-hidden className="size-5" />}>
+        Send the mails again
       </Button>
     </ActionForm>
   );

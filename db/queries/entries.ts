@@ -2,6 +2,7 @@
 // the submission itself. The entrant who owns an entry may change it while the show takes entries;
 // the show's chair may change any entry of their show at any time. Everyone else gets a 404.
 import "server-only";
+import { isUuid } from "@/lib/ids";
 import { randomUUID } from "node:crypto";
 import { and, desc, eq, notInArray, sql } from "drizzle-orm";
 import { db, type Tx } from "@/db/client";
@@ -49,7 +50,6 @@ const NOT_COUNTED_FOR_ENTRANT = ["draft", "withdrawn"] as const;
 /** Entries that hold one of the show's places (capacity). */
 const NOT_COUNTED_FOR_CAPACITY = ["draft", "withdrawn", "declined"] as const;
 
-const isUuid = (s: string) => /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i.test(s);
 
 type Access = { entry: Entry; show: ShowFacts; isChair: boolean };
 

@@ -4,7 +4,7 @@ import "server-only";
 import { and, asc, desc, eq, inArray, isNull, notInArray, sql } from "drizzle-orm";
 import { db, type Tx } from "@/db/client";
 import {
-  awardPicks, categories, entries, entryPhotos, judgeSheets, judgingPanels, panelCategories, panelMembers, placementOverrides, resultPublications, scoreSheets, shows, showAwards, showSettings, tieOrders, user,
+  awardPicks, categories, entries, entryPhotos, judgeSheets, judgingPanels, panelCategories, panelMembers, placementOverrides, resultMails, resultPublications, scoreSheets, shows, showAwards, showSettings, tieOrders, user,
 } from "@/db/schema";
 import { writeAudit } from "@/db/queries/audit";
 import { JUDGED_OUT } from "@/db/queries/judging-setup";
@@ -114,12 +114,23 @@ export async function resultsReview(viewer: Viewer, slug: string) {
   const entryIds = input.categories.flatMap((c) => c.entries.map((e) => e.entryId));
   const photos = entryIds.length ? await db.select({ entryId: entryPhotos.entryId, id: entryPhotos.id }).from(entryPhotos).where(and(inArray(entryPhotos.entryId, entryIds), eq(entryPhotos.view, "full"))) : [];
   const current = publications.find((p) => !p.unpublishedAt) ?? null;
+  const mails = current ? await db.select({ sentAt: resultMails.sentAt, error: resultMails.error }).from(resultMails).where(eq(resultMails.publicationId, current.id)) : [];
+  const mailStatus = current ? { sent: mails.filter((m) => m.sentAt).length, failed: mails.filter((m) => !m.sentAt).length, lastError: mails.find((m) => !m.sentAt)?.error ?? "" } : null;
   return {
+    mailStatus,
     show: show!, rules: input.rules, sections, results, awards: input.awards, picks: pickRows, judges,
     photoOf: Object.fromEntries(photos.map((p) => [p.entryId, p.id])), publications, current,
   };
 }
 export type ResultsReview = Awaited<ReturnType<typeof resultsReview>>;
+
+/** The chair's current publication (for sending its mails again); 409 when nothing is published. */
+export async function currentPublicationForChair(viewer: Viewer, slug: string) {
+  const { showId } = await requireShowRole(viewer, slug, ["chair"]);
+  const [row] = await db.select({ id: resultPublications.id, version: resultPublications.version }).from(resultPublications).where(and(eq(resultPublications.showId, showId), isNull(resultPublications.unpublishedAt)));
+  if (!row) throw conflict("The results are not published, so there are no mails to send.");
+  return row;
+}
 
 /** Refuses changes to results while they are published or before judging. */
 export function assertResultsOpen(status: string) {

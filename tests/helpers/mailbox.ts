@@ -2,7 +2,8 @@
 import { simpleParser, type AddressObject } from "mailparser";
 
 export type MailSummary = { id: string; subject: string; to: string[]; from: string[]; time: string };
-export type ParsedMail = { id: string; subject: string; to: string[]; text: string; html: string; links: string[] };
+export type MailAttachment = { filename: string; contentType: string; size: number; content: Buffer };
+export type ParsedMail = { id: string; subject: string; to: string[]; text: string; html: string; links: string[]; attachments: MailAttachment[] };
 
 type MaildevEmail = { id: string; subject?: string; to?: { address: string }[]; from?: { address: string }[]; time: string };
 
@@ -54,7 +55,8 @@ export async function readMail(mailWebUrl: string, id: string): Promise<ParsedMa
   const parsed = await simpleParser(Buffer.from(await res.arrayBuffer()));
   const html = typeof parsed.html === "string" ? parsed.html : "";
   const text = parsed.text ?? "";
-  return { id, subject: parsed.subject ?? "", to: addresses(parsed.to), text, html, links: extractLinks(html, text) };
+  const attachments = parsed.attachments.map((a) => ({ filename: a.filename ?? "", contentType: a.contentType, size: a.size, content: a.content }));
+  return { id, subject: parsed.subject ?? "", to: addresses(parsed.to), text, html, links: extractLinks(html, text), attachments };
 }
 
 export async function clearMail(mailWebUrl: string): Promise<void> {

@@ -1,11 +1,14 @@
 // Access rows for the chair's results: the results files and every results action. Writes run
 // against a show of their own at judging (the world's chair its chair, the world's judge on its
 // panel), so publishing never touches the shared show other rows rely on. All are the chair's alone.
+import { randomUUID } from "node:crypto";
 import { db } from "@/db/client";
-import { judgingPanels, panelMembers, resultPublications, showAwards, awardPicks, placementOverrides } from "@/db/schema";
-import { DEFAULT_RESULT_RULES } from "@/scoring/results";
+import { entryPhotos, judgeSheets, judgingPanels, panelMembers, resultPublications, showAwards, awardPicks, placementOverrides } from "@/db/schema";
+import { DEFAULT_RESULT_RULES, type PublishedResults } from "@/scoring/results";
+import { ensureBucket, putObject } from "@/storage/s3";
 import { grantRole, makeCategory, makeEntry, makeShow } from "../../../helpers/factories";
-import { only, type Case, type World } from "../table";
+import { pngOf } from "../../../helpers/photo-fixtures";
+import { everyone, only, signedIn, type Case, type World } from "../table";
 
 async function judgingShow(w: World, status: "judging" | "results_published" = "judging") {
   const show = await makeShow({ status });
@@ -30,9 +33,36 @@ async function withAward(w: World) {
   return { show, entry, awardId: award!.id };
 }
 
+/** A show whose results are out: the world's entrant's entry placed 1st, a submitted sheet, a photo. */
+async function publishedShow(w: World) {
+  const show = await judgingShow(w, "results_published");
+  const category = await makeCategory(show.id);
+  const entry = await makeEntry(show.id, w.users.entrant.id, { status: "received", categoryId: category.id, categoryState: "decided" });
+  await db.insert(judgeSheets).values({ showId: show.id, entryId: entry.id, judgeUserId: w.users.judge.id, status: "submitted", state: { status: "submitted", version: 1, fields: {}, conflicts: [] } as never });
+  const snapshot: PublishedResults = {
+    version: 1, publishedAt: new Date().toISOString(), awards: [],
+    categories: [{ id: category.id, code: category.code, name: category.name, entries: [{ entryId: entry.id, entryNumber: entry.entryNumber!, title: entry.title, entrantUserId: w.users.entrant.id, categoryId: category.id, place: 1, placeLabel: "1st", honorableMention: false, ribbon: RIBBON, awards: [] }] }],
+  };
+  const [pub] = await db.insert(resultPublications).values({ showId: show.id, version: 1, snapshot }).returning({ id: resultPublications.id });
+  return { show, entry, publicationId: pub!.id };
+}
+
+async function publishedPhoto(w: World) {
+  const { show, entry } = await publishedShow(w);
+  await ensureBucket();
+  const key = `tests/authz/${randomUUID()}/web.png`;
+  await putObject(key, await pngOf(40, 30), "image/png");
+  const [row] = await db.insert(entryPhotos).values({ entryId: entry.id, view: "full", storageKey: key, webKey: key, thumbKey: key, widthPx: 40, heightPx: 30, bytes: 100, contentType: "image/png" }).returning({ id: entryPhotos.id });
+  return { slug: show.slug, photoId: row!.id };
+}
+
 const base = "(chair)/shows/[slug]/manage/results";
 
 export const routes: Record<string, Case> = {
+  // Only the entrant's own entry; anyone else is told there is no critique, so an id confirms nothing.
+  "GET /api/entries/[id]/critique": { expect: { ...signedIn(404), entrant: 200 }, request: async (w) => ({ params: { id: (await publishedShow(w)).entry.id } }) },
+  // Published, awarded entries' full photos are public (the results page has no sign-in).
+  "GET /api/shows/[slug]/results/photos/[photoId]": { expect: everyone(200), request: async (w) => ({ params: await publishedPhoto(w) }) },
   "GET /api/shows/[slug]/exports/[kind]": { expect: only({ chair: 200 }), request: async (w) => ({ params: { slug: w.show.slug, kind: "awards" } }) },
 };
 
@@ -88,6 +118,7 @@ export const actions: Record<string, Case> = {
     },
   },
   [`${base}#publishResultsAction`]: { expect: only({ chair: 200 }), input: async (w) => ({ showSlug: (await judgingShow(w)).slug, reason: "" }) },
+  [`${base}#resendResultMailsAction`]: { expect: only({ chair: 200 }), input: async (w) => ({ showSlug: (await publishedShow(w)).show.slug }) },
   [`${base}#unpublishResultsAction`]: {
     expect: only({ chair: 200 }),
     input: async (w) => {

@@ -4,8 +4,9 @@
 import { revalidatePath } from "next/cache";
 import { z } from "zod";
 import { clearPlacement, deleteAward, overridePlacement, recordPick, removePick, saveAward, saveResultRules, saveTieOrder } from "@/db/queries/result-changes";
-import { publishResults, unpublishResults } from "@/db/queries/results";
+import { currentPublicationForChair, publishResults, unpublishResults } from "@/db/queries/results";
 import { defineAction } from "@/lib/action";
+import { sendResultMails, type ResultMailReport } from "@/lib/result-mails";
 import {
   awardSchema, clearPlacementSchema, deleteAwardSchema, pickSchema, placementSchema, publishSchema, removePickSchema, resultRulesSchema, tieOrderSchema, unpublishSchema,
 } from "@/lib/schemas/results";
@@ -67,10 +68,34 @@ export const removePickAction = defineAction(withSlug(removePickSchema), async (
   return { message: "Removed." };
 });
 
+const plural = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;
+
+/** The mails go after the commit: a failed mail never undoes publishing, and "Send again" retries. */
+async function mailResults(publicationId: string, done: string): Promise<{ message: string }> {
+  let report: ResultMailReport;
+  try {
+    report = await sendResultMails(publicationId);
+  } catch (err) {
+    console.error("[results] mails failed", err);
+    return { message: `${done} The e-mails could not be sent; use "Send the mails again".` };
+  }
+  const parts = [
+    report.sent ? `${plural(report.sent, "entrant")} e-mailed` : "",
+    report.failed ? `${report.failed} could not be e-mailed (use "Send the mails again")` : "",
+    report.unchanged ? `${plural(report.unchanged, "entrant")} with unchanged results not e-mailed again` : "",
+  ].filter(Boolean);
+  return { message: `${done}${parts.length ? ` ${parts.join("; ")}.` : ""}` };
+}
+
 export const publishResultsAction = defineAction(withSlug(publishSchema), async ({ showSlug: slug, ...input }, viewer) => {
-  const { version } = await publishResults(viewer, slug, input);
+  const { id, version } = await publishResults(viewer, slug, input);
   refresh(slug);
-  return { message: `Results published (version ${version}).` };
+  return mailResults(id, `Results published (version ${version}).`);
+});
+
+export const resendResultMailsAction = defineAction(z.object({ showSlug }), async ({ showSlug: slug }, viewer) => {
+  const { id } = await currentPublicationForChair(viewer, slug);
+  return mailResults(id, "Mails retried.");
 });
 
 export const unpublishResultsAction = defineAction(withSlug(unpublishSchema), async ({ showSlug: slug, ...input }, viewer) => {

@@ -55,7 +55,7 @@ export default async function ResultsPage({ params }: Props) {
 
       <Card aria-labelledby="publish">
         <CardHeader id="publish" title="Publish" />
-        <PublishPanel showSlug={slug} timeZone={timeZone} status={review.show.status} blockers={review.results.blockers} warnings={review.results.warnings} publications={review.publications} current={review.current} />
+        <PublishPanel showSlug={slug} timeZone={timeZone} status={review.show.status} blockers={review.results.blockers} warnings={review.results.warnings} publications={review.publications} current={review.current} mailStatus={review.mailStatus} />
       </Card>
 
       <section aria-labelledby="review" className="space-y-4">
