@@ -3,10 +3,11 @@
 // missing, and a Withdraw button with a confirm step that says what refund it would give.
 import Link from "next/link";
 import { useState, useTransition } from "react";
-import { CircleSlash } from "lucide-react";
+import { Award, CircleSlash, FileText } from "lucide-react";
 import { withdrawEntryAction } from "@/app/(entrant)/my/actions";
 import { EntryStatusBadge, entryStatusInfo } from "@/components/entries/entry-status";
 import { plainReasons, sizeFirst, storedHeadline } from "@/components/entries/category-words";
+import { RibbonSwatch } from "@/components/results/ribbon-swatch";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { formatMoney } from "@/scoring/fees";
@@ -28,6 +29,13 @@ export type EntryCardProps = {
     refundIfWithdrawnCents: number;
     category: { state: string; code: string | null; name: string | null; reasons: string[] } | null;
     waitlistReason: string;
+    /** Once the show's results are published: the result in words and the critique (or why none). */
+    result?: {
+      words: string;
+      ribbon: { name: string; colour: string } | null;
+      awarded: boolean;
+      critique: { available: true; url: string } | { available: false; why: string };
+    } | null;
   };
   currency: string;
   refundPercent: number;
@@ -57,6 +65,7 @@ export function EntryCard({ entry: e, currency, refundPercent }: EntryCardProps)
       {/* A new draft holds a 1 µm placeholder size until the quilt step is saved. */}
       <p className="text-ink-muted">{e.widthUm > UNSET_LENGTH_UM && e.lengthUm > UNSET_LENGTH_UM ? formatSize(e.widthUm, e.lengthUm) : "Size not given yet"}</p>
       <CategoryLine category={e.category} />
+      {e.result ? <ResultLine result={e.result} entryNumber={e.entryNumber} /> : null}
       {e.waitlistReason ? (
         <p className="text-sm">
           <span className="font-semibold">Why it waits:</span> {e.waitlistReason}
@@ -75,6 +84,24 @@ export function EntryCard({ entry: e, currency, refundPercent }: EntryCardProps)
       ) : null}
       {e.canWithdraw ? <WithdrawEntry entry={e} currency={currency} refundPercent={refundPercent} /> : null}
     </li>
+  );
+}
+
+function ResultLine({ result: r, entryNumber }: { result: NonNullable<EntryCardProps["entry"]["result"]>; entryNumber: number | null }) {
+  return (
+    <div className="space-y-1 rounded-control border border-gold-300 bg-gold-50 p-3">
+      <p className="flex items-center gap-2 font-semibold">
+        <Award aria-hidden className="size-5 shrink-0 text-gold-700" />
+        <span>Result: {r.ribbon ? <RibbonSwatch ribbon={r.ribbon} label={r.words} /> : r.words}</span>
+      </p>
+      {r.critique.available ? (
+        <a href={r.critique.url} className="inline-flex min-h-tap items-center gap-2 font-semibold" aria-label={`Judges' critique of entry ${entryNumber ?? ""} (PDF)`}>
+          <FileText aria-hidden className="size-5" /> Judges&apos; critique (PDF)
+        </a>
+      ) : (
+        <p className="text-sm text-ink-muted">{r.critique.why}</p>
+      )}
+    </div>
   );
 }
 

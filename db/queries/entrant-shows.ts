@@ -4,6 +4,7 @@ import "server-only";
 import { asc, desc, eq } from "drizzle-orm";
 import { db } from "@/db/client";
 import { entryFeesPaidCents, memberAt, scheduleOf } from "@/db/queries/payments";
+import { myResults } from "@/db/queries/published-results";
 import { settingsForShowId } from "@/db/queries/settings";
 import { refundIfWithdrawn } from "@/db/queries/withdrawals";
 import { categories, entries, shows } from "@/db/schema";
@@ -63,6 +64,8 @@ export async function myEntriesByShow(viewer: Viewer, now = new Date()) {
     .where(eq(entries.entrantUserId, viewer.id))
     .orderBy(desc(shows.showOpensAt), asc(shows.name), asc(entries.entryNumber));
 
+  // Results only for shows whose results are published now (nothing before, nothing after a take-down).
+  const results = await myResults(viewer, rows.filter((r) => r.status !== "draft").map((r) => r.showId));
   const byShow = new Map<string, typeof rows>();
   for (const r of rows) byShow.set(r.showId, [...(byShow.get(r.showId) ?? []), r]);
 
@@ -92,6 +95,7 @@ export async function myEntriesByShow(viewer: Viewer, now = new Date()) {
             canPay: e.status === "submitted" && !e.waitlisted && e.paidAt === null,
             canWithdraw: withdrawOpen && WITHDRAWABLE.has(e.status),
             refundIfWithdrawnCents: refund?.refundCents ?? 0,
+            result: results.get(e.id) ?? null,
           };
         }),
       );

@@ -2,7 +2,8 @@
 // for, the current rules and release, and how to enter a quilt.
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
-import { ClipboardCheck, MapPin, PackageOpen, Users } from "lucide-react";
+import Link from "next/link";
+import { Award, ClipboardCheck, MapPin, PackageOpen, Users } from "lucide-react";
 import { formatDateRange, formatDateTime } from "@/components/format/dates";
 import { EnterCallout } from "@/components/shows/enter-callout";
 import { ShowDateList } from "@/components/shows/show-dates";
@@ -47,6 +48,14 @@ export default async function PublicShowPage({ params }: Props) {
         meta={<ShowStatusBadge status={show.status} />}
         description={formatDateRange(show.showOpensAt, show.showClosesAt, show.timeZone) ?? undefined}
       />
+      {show.status === "results_published" ? (
+        <p className="flex items-center gap-2 rounded-card border border-gold-300 bg-gold-50 p-4 text-lg">
+          <Award aria-hidden className="size-6 shrink-0 text-gold-700" />
+          <span>
+            The results are out. <Link href={`/shows/${show.slug}/results`} className="font-semibold">See the ribbons and awards</Link>
+          </span>
+        </p>
+      ) : null}
       <div className="grid gap-6 lg:grid-cols-[1fr_22rem]">
         <div className="space-y-6">
           <Card aria-labelledby="dates">
