@@ -113,7 +113,9 @@ async function test(args: string[]) {
       app = serve({ ...env, AUTH_SIGN_IN_LIMIT_PER_MINUTE: "1000" }, env.PORT!, "127.0.0.1");
       await waitForHealth(env.APP_URL!, 90_000);
       const json = path.join(out, "playwright.json");
-      await run(process.execPath, [path.join(ROOT, "node_modules/@playwright/test/cli.js"), "test"], {
+      // `--only=e2e tests/e2e/some.spec.ts` runs just those specs (any other arguments go to Playwright).
+      const specs = only === "e2e" ? args.filter((a) => !a.startsWith("--only=")) : [];
+      await run(process.execPath, [path.join(ROOT, "node_modules/@playwright/test/cli.js"), "test", ...specs], {
         ...env,
         PLAYWRIGHT_JSON_OUTPUT_NAME: json,
       });
