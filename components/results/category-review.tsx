@@ -25,6 +25,7 @@ function EntryRow({ o, showSlug, photoId, places, locked, judges }: { o: EntryOu
   return (
     <li className="grid gap-3 py-4 sm:grid-cols-[6rem_1fr]" aria-label={`Entry ${o.entry.entryNumber}`}>
       {photoId ? (
+        // eslint-disable-next-line @next/next/no-img-element -- private bytes through our own route, not the image optimiser
         <img src={`/api/photos/${photoId}/thumb`} alt={`Entry ${o.entry.entryNumber}, full view`} loading="lazy" className="aspect-square w-24 rounded-control border border-line bg-paper-200 object-cover" />
       ) : (
         <div className="flex aspect-square w-24 items-center justify-center rounded-control border border-dashed border-line text-sm text-ink-muted">No photo</div>
