@@ -3,6 +3,7 @@
 import { photoForViewer } from "@/db/queries/entries";
 import { defineRoute } from "@/lib/api";
 import { notFound } from "@/lib/errors";
+import { photoResponse } from "@/lib/photo-response";
 import { PHOTO_SIZES, type PhotoSize } from "@/lib/schemas/entry";
 import { getObjectBytes } from "@/storage/s3";
 
@@ -10,13 +11,5 @@ export const GET = defineRoute<{ photoId: string; size: string }>({ access: "use
   if (!PHOTO_SIZES.includes(params.size as PhotoSize)) throw notFound("There is no such photo size.");
   const photo = await photoForViewer(viewer!, params.photoId, params.size as PhotoSize);
   const bytes = await getObjectBytes(photo.key);
-  return new Response(new Uint8Array(bytes), {
-    headers: {
-      "content-type": photo.contentType,
-      "content-length": String(bytes.length),
-      // Keys are never reused, but access can be taken away: keep it in this browser only, briefly.
-      "cache-control": "private, max-age=300",
-      "x-content-type-options": "nosniff",
-    },
-  });
+  return photoResponse(bytes, photo.contentType);
 });

@@ -3,6 +3,7 @@
 import { publicResultPhoto } from "@/db/queries/published-results";
 import { defineRoute } from "@/lib/api";
 import { notFound } from "@/lib/errors";
+import { photoResponse } from "@/lib/photo-response";
 import { isUuid } from "@/lib/ids";
 import { getObjectBytes } from "@/storage/s3";
 
@@ -12,13 +13,5 @@ export const GET = defineRoute<{ slug: string; photoId: string }>({ access: "pub
   const size = new URL(req.url).searchParams.get("size");
   const key = size === "thumb" ? (photo.thumbKey ?? photo.webKey ?? photo.storageKey) : (photo.webKey ?? photo.storageKey);
   const bytes = await getObjectBytes(key);
-  return new Response(new Uint8Array(bytes), {
-    headers: {
-      "content-type": photo.contentType,
-      "content-length": String(bytes.length),
-      // Results can be taken down again: browsers may keep it briefly, shared caches not at all.
-      "cache-control": "private, max-age=300",
-      "x-content-type-options": "nosniff",
-    },
-  });
+  return photoResponse(bytes, photo.contentType);
 });
