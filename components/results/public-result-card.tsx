@@ -11,7 +11,7 @@ export function PublicResultCard({ card, showSlug, headingLevel = 3 }: { card: P
       <article aria-labelledby={headingId} className="flex h-full flex-col overflow-hidden rounded-card border border-line bg-surface shadow-sm">
         {card.photoId ? (
           // eslint-disable-next-line @next/next/no-img-element -- private bytes through our own route, not the image optimiser
-          <img src={`/api/shows/${showSlug}/results/photos/${card.photoId}`} alt={`Entry ${card.entryNumber}, ${card.title}`} loading="lazy" className="aspect-[4/3] w-full bg-paper-200 object-cover" />
+          <img src={`/api/shows/${showSlug}/results/photos/${card.photoId}`} alt={`Entry ${card.entryNumber}, ${card.title}`} loading="lazy" className="aspect-[4/3] w-full bg-paper-200 object-contain" />
         ) : (
           <div aria-hidden className="aspect-[4/3] w-full bg-paper-200" />
         )}

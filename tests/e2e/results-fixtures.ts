@@ -1,6 +1,6 @@
 // A scratch show whose judging is done, for the results journey: the judging scratch show (two
 // demo judges, one category, four entries with photos) handed to an entrant of its own who
-// consents to their name being published, and every judge's sheet submitted with marks and
+// consents to their name being published (signing in with the demo password), and every judge's sheet submitted with marks and
 // comments, so the chair can review and publish at once.
 import { randomUUID } from "node:crypto";
 import { DEMO_SHEET } from "../../db/seed/demo-judging";
@@ -34,6 +34,10 @@ export async function makeResultsShow(prefix: string): Promise<ResultsShow> {
   try {
     await sql.begin(async (tx) => {
       await tx`insert into "user" (id, name, email, email_verified) values (${entrant.id}, ${entrant.name}, ${entrant.email}, true)`;
+      // The demo password, by copying the chair's stored hash, so the journey can sign in as this entrant.
+      await tx`insert into account (id, account_id, provider_id, user_id, password, created_at, updated_at)
+        select ${randomUUID()}, ${entrant.id}, 'credential', ${entrant.id}, a.password, now(), now()
+        from account a join "user" u on u.id = a.user_id where u.email = 'chair@ribbonry.test' and a.provider_id = 'credential'`;
       await tx`insert into entrant_profiles (user_id, display_name, publish_name_consent) values (${entrant.id}, ${entrant.name}, true)`;
       await tx`update entries set entrant_user_id = ${entrant.id} where show_id = ${show.id}`;
       await tx`insert into show_settings (show_id) values (${show.id}) on conflict do nothing`;

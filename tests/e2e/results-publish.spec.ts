@@ -1,7 +1,8 @@
 // Journey, at a desk then on a phone: before publishing, the public results page shows nothing;
 // the chair reviews a judged category, changes one placement with a reason (audited), publishes;
 // the public page then shows the ribbons with the consenting entrant's name, and the entrant's
-// mail arrives with each entry's critique sheet attached.
+// mail arrives with each entry's critique sheet attached, and My entries shows the results and
+// opens the critique.
 import { expect, test } from "@playwright/test";
 import { waitForMail } from "../helpers/mailbox";
 import { removeShow } from "./db";
@@ -84,4 +85,17 @@ test("the chair changes a placement with a reason and publishes; the public page
   const names = mail.attachments.map((a) => a.filename);
   expect(names).toEqual(expect.arrayContaining(["critique-101.pdf", "critique-104.pdf"]));
   expect(mail.attachments.every((a) => a.contentType === "application/pdf" && a.size > 1000)).toBe(true);
+
+  // The entrant on a phone: My entries shows each result and the critique to open.
+  await signIn(page, show.entrant.email);
+  await page.goto("/my");
+  const mine = page.getByRole("listitem").filter({ hasText: "Scratch quilt 101" });
+  await expect(mine).toContainText("Result: 1st place (Blue)");
+  const link = mine.getByRole("link", { name: /critique of entry 101/i });
+  const pdf = await page.request.get((await link.getAttribute("href"))!);
+  expect(pdf.status()).toBe(200);
+  expect(pdf.headers()["content-type"]).toBe("application/pdf");
+  await expect(page.getByRole("listitem").filter({ hasText: "Scratch quilt 104" })).toContainText("Result: Honorable mention (Green)");
+  await expectNoSidewaysScroll(page);
+  await shootAllWidths(page, "results-my-entries");
 });
