@@ -61,6 +61,8 @@ export type EntrantRow = Omit<EntrantFacts, "entries" | "payments"> & {
   paymentStatus: PaymentStatusText;
   /** The latest moment money was taken (card) or an entry was marked paid offline; null if never. */
   lastPaymentAt: Date | null;
+  /** Declined entries that were paid with no refund on record: the treasurer decides what to give back. */
+  refundToCheck: (number | string)[];
 };
 
 export type AccountContext = { schedule: FeeSchedule; showGuildName: string; now: Date };
@@ -85,7 +87,7 @@ export function paymentStatusOf(a: { feesDueCents: number; paidCents: number; ou
 }
 
 /** Card money: net charged, refunds, the entries it paid for, and card entry fees the cap counts. */
-function cardTotals(facts: EntrantFacts) {
+function cardTotals(facts: Pick<EntrantFacts, "entries" | "payments">) {
   const charged = facts.payments.filter((p) => CHARGED.has(p.status));
   const inShow = new Set(facts.entries.filter((e) => !OUT_OF_SHOW.has(e.status)).map((e) => e.id));
   const items = charged.flatMap((p) => p.items);
@@ -98,20 +100,37 @@ function cardTotals(facts: EntrantFacts) {
   };
 }
 
-export function entrantAccount(facts: EntrantFacts, ctx: AccountContext): EntrantRow {
-  const member = isGuildMember(facts.guild, ctx.showGuildName);
+/**
+ * Money already taken at the show (card net of refunds, offline quoted as of when it was marked
+ * paid) and the entry fees the per-entrant cap counts, for entries still in the show. Checkout
+ * (db/queries/payments.ts) and the entrants spreadsheet both use this, so what checkout charges
+ * and what the spreadsheet says is outstanding agree.
+ */
+export function takenSoFar(facts: Pick<EntrantFacts, "entries" | "payments">, ctx: { schedule: FeeSchedule; member: boolean }) {
   const card = cardTotals(facts);
   const sorted = [...facts.entries].filter((e) => e.status !== "draft").sort(byNumber);
   const offline = sorted.filter((e) => e.paidAt && !card.entryIds.has(e.id) && e.paymentReference !== NO_FEE);
-  const owing = sorted.filter((e) => !OUT_OF_SHOW.has(e.status) && !e.waitlisted && !e.paidAt);
-
-  let capCounted = card.capCountedCents;
+  let capCountedCents = card.capCountedCents;
   let offlineCents = 0;
   for (const e of offline) {
-    const q = quoteFees({ schedule: ctx.schedule, member, at: e.paidAt!, entries: [feeEntry(e)], entryFeesAlreadyPaidCents: capCounted });
+    const q = quoteFees({ schedule: ctx.schedule, member: ctx.member, at: e.paidAt!, entries: [feeEntry(e)], entryFeesAlreadyPaidCents: capCountedCents });
     offlineCents += q.totalCents;
-    if (!OUT_OF_SHOW.has(e.status)) capCounted += q.entryFeesCents;
+    if (!OUT_OF_SHOW.has(e.status)) capCountedCents += q.entryFeesCents;
   }
+  return { card, sorted, offline, offlineCents, capCountedCents };
+}
+
+/** Declined entries paid (card or offline) whose money has not been refunded at all. */
+function declinedUnrefunded(facts: Pick<EntrantFacts, "entries" | "payments">): AccountEntry[] {
+  const refunded = new Set(facts.payments.filter((p) => p.refundedCents > 0).flatMap((p) => p.items.map((i) => i.entryId)));
+  return facts.entries.filter((e) => e.status === "declined" && e.paidAt && e.paymentReference !== NO_FEE && !refunded.has(e.id)).sort(byNumber);
+}
+
+export function entrantAccount(facts: EntrantFacts, ctx: AccountContext): EntrantRow {
+  const member = isGuildMember(facts.guild, ctx.showGuildName);
+  const { card, sorted, offline, offlineCents, capCountedCents: capCounted } = takenSoFar(facts, { schedule: ctx.schedule, member });
+  const owing = sorted.filter((e) => !OUT_OF_SHOW.has(e.status) && !e.waitlisted && !e.paidAt);
+
   const outstandingCents = owing.length ? quoteFees({ schedule: ctx.schedule, member, at: ctx.now, entries: owing.map(feeEntry), entryFeesAlreadyPaidCents: capCounted }).totalCents : 0;
   const paidCents = card.netCents + offlineCents;
   const feesDueCents = paidCents + outstandingCents;
@@ -127,6 +146,7 @@ export function entrantAccount(facts: EntrantFacts, ctx: AccountContext): Entran
     outstandingCents,
     paymentStatus: paymentStatusOf({ feesDueCents, paidCents, outstandingCents, refundedCents: card.refundedCents }),
     lastPaymentAt: latest([card.lastPaidAt, ...offline.map((e) => e.paidAt)]),
+    refundToCheck: declinedUnrefunded(facts).map((e) => e.entryNumber ?? e.title),
   };
 }
 

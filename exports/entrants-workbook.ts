@@ -38,6 +38,7 @@ function columns(opts: EntrantsWorkbookOptions): XlsxColumn<EntrantRow>[] {
     { header: "Paid", width: 12, numFmt: money, value: (r) => cents(r.paidCents) },
     { header: "Outstanding", width: 12, numFmt: money, value: (r) => cents(r.outstandingCents) },
     { header: "Payment status", width: 13, value: (r) => r.paymentStatus },
+    { header: "Refund to check (declined, paid, not refunded)", width: 18, value: (r) => r.refundToCheck.join(", ") },
     { header: `Last payment (${opts.timeZone})`, width: 14, numFmt: "yyyy-mm-dd", value: (r) => (r.lastPaymentAt ? showDay(r.lastPaymentAt, opts.timeZone) : null) },
     { header: "Name may be published", width: 11, value: (r) => yesNo(r.publishNameConsent) },
   ];

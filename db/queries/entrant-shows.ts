@@ -73,6 +73,7 @@ export async function myEntriesByShow(viewer: Viewer, now = new Date()) {
     [...byShow.values()].map(async (list) => {
       const s = list[0]!;
       const settings = await settingsForShowId(s.showId);
+      const member = await memberAt(db, viewer.id, s.guildName);
       const withdrawOpen = !s.entryClosesAt || now.getTime() < s.entryClosesAt.getTime();
       const shaped = await Promise.all(
         list.map(async (e) => {
@@ -116,8 +117,8 @@ export async function myEntriesByShow(viewer: Viewer, now = new Date()) {
         juried: settings.juried,
         refundPercent: settings.withdrawalRefundPercent,
         schedule: scheduleOf(settings),
-        member: await memberAt(db, viewer.id, s.guildName),
-        entryFeesAlreadyPaidCents: await entryFeesPaidCents(db, viewer.id, s.showId),
+        member,
+        entryFeesAlreadyPaidCents: await entryFeesPaidCents(db, viewer.id, s.showId, { schedule: scheduleOf(settings), member }),
         withdrawOpen,
         entries: shaped,
       };

@@ -17,7 +17,8 @@ import { env } from "@/lib/env";
 import { badInput, conflict, notFound } from "@/lib/errors";
 import { stripe } from "@/lib/payments";
 import type { Viewer } from "@/lib/session";
-import { feeKindOf, isGuildMember, quoteFees, type FeeSchedule } from "@/scoring/fees";
+import { takenSoFar } from "@/exports/entrant-accounts";
+import { isGuildMember, quoteFees, type FeeSchedule } from "@/scoring/fees";
 
 /**
  * Records the event; `apply` (e.g. marking an entry fee paid) runs in the same transaction and only
@@ -66,15 +67,28 @@ async function memberAt(reader: Pick<Tx, "select">, userId: string, guildName: s
   return isGuildMember(profile?.guild, guildName);
 }
 
-/** Entry fees the entrant has been charged at this show for entries still in it (what the cap counts). */
-async function entryFeesPaidCents(reader: Pick<Tx, "select">, userId: string, showId: string): Promise<number> {
-  const rows = await reader
-    .select({ amountCents: paymentItems.amountCents, description: paymentItems.description })
-    .from(paymentItems)
-    .innerJoin(payments, eq(payments.id, paymentItems.paymentId))
-    .innerJoin(entries, eq(entries.id, paymentItems.entryId))
-    .where(and(eq(payments.entrantUserId, userId), eq(payments.showId, showId), inArray(payments.status, [...CHARGED]), ne(entries.status, "withdrawn")));
-  return rows.filter((r) => feeKindOf(r.description) === "entry").reduce((sum, r) => sum + r.amountCents, 0);
+/**
+ * Entry fees the per-entrant cap counts already: paid by card or marked paid offline, for entries
+ * still in the show. The same rule as the entrants spreadsheet (exports/entrant-accounts.ts).
+ */
+async function entryFeesPaidCents(reader: Pick<Tx, "select">, userId: string, showId: string, ctx: { schedule: FeeSchedule; member: boolean }): Promise<number> {
+  const [mine, paid, lines] = await Promise.all([
+    reader
+      .select({ id: entries.id, entryNumber: entries.entryNumber, title: entries.title, status: entries.status, waitlisted: entries.waitlisted, critiqueRequested: entries.critiqueRequested, paidAt: entries.paidAt, paymentReference: entries.paymentReference })
+      .from(entries)
+      .where(and(eq(entries.entrantUserId, userId), eq(entries.showId, showId), ne(entries.status, "draft"))),
+    reader
+      .select({ id: payments.id, status: payments.status, amountCents: payments.amountCents, refundedCents: payments.refundedCents, paidAt: payments.paidAt })
+      .from(payments)
+      .where(and(eq(payments.entrantUserId, userId), eq(payments.showId, showId), inArray(payments.status, [...CHARGED]))),
+    reader
+      .select({ paymentId: paymentItems.paymentId, entryId: paymentItems.entryId, amountCents: paymentItems.amountCents, description: paymentItems.description })
+      .from(paymentItems)
+      .innerJoin(payments, eq(payments.id, paymentItems.paymentId))
+      .where(and(eq(payments.entrantUserId, userId), eq(payments.showId, showId), inArray(payments.status, [...CHARGED]))),
+  ]);
+  const accountPayments = paid.map(({ id, ...p }) => ({ ...p, items: lines.filter((l) => l.paymentId === id).map(({ paymentId: _p, ...l }) => l) }));
+  return takenSoFar({ entries: mine, payments: accountPayments }, ctx).capCountedCents;
 }
 
 const scheduleOf = (s: Awaited<ReturnType<typeof settingsForShowId>>): FeeSchedule => ({
@@ -155,12 +169,13 @@ export async function startCheckout(viewer: Viewer, input: { showSlug: string; e
     }
     await expireOpenPaymentsFor(tx, viewer.id, ids);
 
+    const member = await memberAt(tx, viewer.id, show.guildName);
     const quote = quoteFees({
       schedule: scheduleOf(settings),
-      member: await memberAt(tx, viewer.id, show.guildName),
+      member,
       at: now,
       entries: rows.map((r) => ({ entryId: r.id, entryNumber: r.entryNumber, title: r.title, critiqueRequested: r.critiqueRequested })),
-      entryFeesAlreadyPaidCents: await entryFeesPaidCents(tx, viewer.id, show.id),
+      entryFeesAlreadyPaidCents: await entryFeesPaidCents(tx, viewer.id, show.id, { schedule: scheduleOf(settings), member }),
     });
     const back = (q: string) => new URL(`/my?${q}`, env.APP_URL).toString();
 

@@ -120,8 +120,8 @@ describe("the entrants workbook", () => {
     expect(ws[`${col("Fees due")}${rowan}`]!.z).toContain("0.00");
     expect(ws[`${col("Last payment (America/Chicago)")}${rowan}`]!.t).toBe("d");
     expect(ws[`${col("Name")}${rowan}`]!.t).toBe("s");
-    expect(header).toHaveLength(19);
-    expect(ws["!autofilter"]).toEqual({ ref: "A1:S1" });
+    expect(header).toHaveLength(20);
+    expect(ws["!autofilter"]).toEqual({ ref: "A1:T1" });
     const files = (wb as unknown as { files: Record<string, { content: Uint8Array }> }).files;
     const sheetXml = Buffer.from(files["xl/worksheets/sheet1.xml"]!.content).toString("utf8");
     expect(sheetXml).toMatch(/<pane[^>]*ySplit="1"[^>]*state="frozen"|<pane[^>]*state="frozen"[^>]*ySplit="1"/);

@@ -224,6 +224,18 @@ describe("checkout edge cases", () => {
     expect(second.totalCents).toBe(500 + 1000); // capped entry fee, critique on top
   });
 
+  it("counts an entry marked paid offline toward the cap, and not a declined one: the same figure as the entrants spreadsheet", async () => {
+    const capped = await makeShow();
+    await db.insert(showSettings).values({ showId: capped.id, entryFeeCents: 2500, feeCapCents: 4000 });
+    const payer = await makeUser();
+    // Paid in cash at a guild meeting (2500 counted), and a declined one paid by cheque (not counted).
+    await makeEntry(capped.id, payer.id, { status: "paid", paidAt: new Date(), paymentReference: "cash, receipt 0042" });
+    await makeEntry(capped.id, payer.id, { status: "declined", paidAt: new Date(), paymentReference: "cheque 311" });
+    const next = await makeEntry(capped.id, payer.id);
+    const c = await checkout(payer, capped.slug, [next.id]);
+    expect(c.totalCents).toBe(4000 - 2500);
+  });
+
   it("marks entries paid at once when nothing is due (a show with no fees)", async () => {
     const free = await makeShow();
     const payer = await makeUser();

@@ -28,6 +28,15 @@ const person = (entries: AccountEntry[], payments: AccountPayment[] = [], fields
 });
 
 describe("entrantAccount", () => {
+  it("lists declined entries that were paid and not refunded for the treasurer to check", () => {
+    const f = person(
+      [cardPaid(101, early, { status: "declined" }), cardPaid(102, early, { status: "declined" }), entry(103, { status: "declined", paidAt: early, paymentReference: "cash" }), entry(104, { status: "declined" }), cardPaid(105)],
+      [payment([[101, 2500, "Entry fee — entry 101"]], { status: "refunded", refundedCents: 2500 }), payment([[102, 2500, "Entry fee — entry 102"], [105, 2500, "Entry fee — entry 105"]])],
+    );
+    // 101 was refunded, 104 was never paid, 105 is still in the show: 102 (card) and 103 (cash) remain.
+    expect(entrantAccount(f, ctx()).refundToCheck).toEqual([102, 103]);
+  });
+
   it("card payment for everything: 2500 + 2500 + 1000 critique = 6000 due and paid", () => {
     const f = person([cardPaid(101), cardPaid(102)], [payment([[101, 2500, "Entry fee — entry 101: Harbor Lights"], [102, 2500, "Entry fee — entry 102"], [102, 1000, "Critique fee — entry 102"]], { paidAt: later })]);
     expect(entrantAccount(f, ctx(late))).toMatchObject({ entries: 2, feesDueCents: 6000, paidCents: 6000, outstandingCents: 0, paymentStatus: "paid", lastPaymentAt: later, member: false });
