@@ -189,7 +189,7 @@ export async function sendDecisionMail(entryIds: string[]): Promise<void> {
 
 /**
  * Before drop-off: the entrant's entry numbers expected at the show, the drop-off times in the
- * show's zone, and what to bring. Sleeve, label and bag are common practice (TRADE.md).
+ * show's zone, and what to bring. Sleeve, label and bag are common practice.
  */
 export async function sendDropOffReminderMail(showId: string, entrantUserId: string): Promise<void> {
   const settings = await settingsForShowId(showId);

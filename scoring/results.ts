@@ -223,10 +223,18 @@ function placeCategory(cat: ResultCategory, rules: ResultRules, ranked: RankedEn
   return { byId, placements, notes };
 }
 
-function tiesAtPlaces(ranked: RankedEntry[], offered: number): string[][] {
+/**
+ * Ties the chair may order: entries level after the whole chain on a rank that decides a place,
+ * either within the places offered or holding a place given at a lower rank (a shared place under
+ * "shareNoSkip", or places passed down when an award takes an entry out of its category's places).
+ */
+function tiesAtPlaces(ranked: RankedEntry[], offered: number, placed: Map<string, Placed>): string[][] {
   const groups = new Map<number, string[]>();
-  for (const r of ranked) if (r.tied && r.rank !== null && r.rank <= offered) groups.set(r.rank, [...(groups.get(r.rank) ?? []), r.entryId]);
-  return [...groups.values()];
+  for (const r of ranked) {
+    const decides = r.rank !== null && (r.rank <= offered || placed.get(r.entryId)?.place != null);
+    if (r.tied && decides) groups.set(r.rank!, [...(groups.get(r.rank!) ?? []), r.entryId]);
+  }
+  return [...groups.values()].filter((g) => g.length > 1);
 }
 
 function rankedCategory(cat: ResultCategory, input: ResultsInput) {
@@ -276,7 +284,7 @@ function categoryOutcome(cat: ResultCategory, input: ResultsInput, awardsOf: Map
   const { judges, entries: _e, ...rest } = cat;
   return {
     category: { ...rest, judges }, direction, scoreLabel: isRanks(cat.method) ? "Mean rank" : rules.rankBy === "adjusted" ? "Adjusted (z)" : "Mean", entries, missing: missingSheets(cat),
-    notAwarded: placements.notAwarded, notes, problems: [...new Set(problems)], tiedForPlace: tiesAtPlaces(ranked, placements.placesOffered),
+    notAwarded: placements.notAwarded, notes, problems: [...new Set(problems)], tiedForPlace: tiesAtPlaces(ranked, placements.placesOffered, byId),
   };
 }
 

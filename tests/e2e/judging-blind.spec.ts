@@ -1,7 +1,7 @@
 // Blind judging, checked from outside: signed in as a demo judge and a demo scribe, the judging
 // session and queue routes of the demo show must not carry any entrant's name, e-mail, phone or
 // guild, any maker's or quilter's name, or the guild of the show itself. (Blind judging: maker's
-// name covered, judges see entry numbers only — common practice, see TRADE.md "Judging".)
+// name covered, judges see entry numbers only — common practice.)
 import { expect, test, type APIRequestContext } from "@playwright/test";
 import { demoScenario } from "../../db/seed/demo-data";
 import { DEMO_PASSWORD, DEMO_SHOW } from "./helpers";

@@ -2,7 +2,7 @@
 // total is worked out live), tries to put a judge on a panel with the category holding that
 // judge's own quilt, reads the refusal and its reason, fixes the panel, records and removes a
 // declaration, and watches the progress board. Judges may not judge a category holding their own
-// quilt (TRADE.md "Judging", seen in several guilds' rules).
+// quilt (seen in several guilds' rules: common practice).
 import { expect, test, type Page } from "@playwright/test";
 import { expectNoSidewaysScroll, shootAllWidths, signIn, VIEWPORTS } from "./helpers";
 import { makeConflictShow, type ConflictShow } from "./judging-setup-fixtures";

@@ -45,7 +45,7 @@ function DropOff({ group }: { group: MyShow }) {
         Entries {coming.map((e) => e.entryNumber ?? e.title).join(", ")}.
       </p>
       <ul className="list-disc space-y-1 pl-5">
-        {/* Sleeve, label and bag: common practice at guild shows (TRADE.md, "Entry requirements"). */}
+        {/* Sleeve, label and bag: common practice at guild shows (seen in several shows' entry instructions). */}
         <li>A hanging sleeve on the top of the back — 4 in deep is the usual size unless the show’s rules say otherwise.</li>
         <li>Your label sewn on the back, lower right corner as seen from the back.</li>
         <li>A cloth bag for each quilt, marked with your name and the entry number.</li>

@@ -130,7 +130,7 @@ describe("sendDropOffReminderMail", () => {
       // 15:00–19:00 UTC in America/Chicago (CST, UTC−6).
       expect(part).toMatch(/Thu, Mar 11, 2027, 9:00\s?AM\s?[–-]\s?1:00\s?PM CST/);
       expect(part).toContain("Test Hall, 12 Mill Road");
-      // Sleeve 4 in: Hill Country Quilt Guild show instructions (TRADE.md); label lower right on the back and a bag per quilt: common practice (TRADE.md).
+      // Sleeve 4 in: Hill Country Quilt Guild show instructions, hillcountryquiltguild.com; label lower right on the back and a bag per quilt: common practice.
       expect(part).toContain("4 in deep");
       expect(part).toContain("lower right corner");
       expect(part).toContain("cloth bag");

@@ -117,7 +117,7 @@ describe("limitsSchema", () => {
 });
 
 describe("photosSchema", () => {
-  // 1000 × 500 px and 5 MB: one show's published photo rules (TRADE.md).
+  // 1000 × 500 px and 5 MB: minimums seen in a show's published photo rules (common practice).
   const photos = { section: "photos", requireFullView: true, requireDetailView: "on", photoMinWidthPx: "1000", photoMinHeightPx: "500", photoMaxBytes: "5", statementWordLimit: "150", techniques: "pieced\nAppliqué\n\npieced\n  art  " };
   it("reads views, pixels, megabytes and the technique list", () => {
     expect(photosSchema.parse(photos)).toEqual({

@@ -1,6 +1,6 @@
 // Entry fees, the per-entrant cap and withdrawal refunds, with the arithmetic written out.
 // Fee shapes (member/non-member rates, caps per entrant, critique add-ons) are common practice
-// at guild shows (TRADE.md, "Fees"); the amounts here are invented.
+// at guild shows (common practice); the amounts here are invented.
 import { describe, expect, it } from "vitest";
 import { feeKindOf, formatMoney, isGuildMember, isLate, quoteFees, withdrawalRefundCents, type FeeSchedule } from "@/scoring/fees";
 

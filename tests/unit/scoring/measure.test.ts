@@ -109,7 +109,7 @@ describe("parseLength in centimetres", () => {
     [" 152 ", 1_520_000],
     ["0.01", 100],
     ["152.45", 1_524_500],
-    ["228.6", 90 * IN], // 90 in = 228.6 cm (TRADE: NIST SP 811)
+    ["228.6", 90 * IN], // 90 in = 228.6 cm (NIST SP 811, Appendix B)
     ["243.84", 96 * IN], // 96 in = 243.84 cm
     ["0.635", null], // ¼ in in cm needs 3 decimals: more than the field takes
     ["2540", 1_000 * IN],
@@ -184,7 +184,7 @@ describe("sizes derived from width × length", () => {
     expect(umOf("96", "in")).toBe(umOf("243.84", "cm"));
   });
 
-  it("a queen-size 60 × 80 in quilt has a perimeter of exactly 280 in (mattress table in TRADE facts)", () => {
+  it("a queen-size 60 × 80 in quilt has a perimeter of exactly 280 in (queen mattress 60 × 80 in, quilters' reference tables, common practice)", () => {
     expect(perimeterUm(umOf("60", "in"), umOf("80", "in"))).toBe(280 * IN);
   });
 

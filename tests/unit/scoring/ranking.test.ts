@@ -25,7 +25,7 @@ describe("judges' averages", () => {
     expect(summariseScores(totals).mean).toBe(mean);
   });
 
-  it("three judges land on thirds, shown to two decimals (TRADE.md, \"Judging\")", () => {
+  it("three judges land on thirds, shown to two decimals (common practice)", () => {
     expect(formatScore(summariseScores([94, 95, 95]).mean)).toBe("94.67"); // 284 / 3 = 94.666…
     expect(formatScore(summariseScores([90, 91, 93]).mean)).toBe("91.33"); // 274 / 3 = 91.333…
     // The same three totals in any order give exactly the same mean, so they tie in the ranking.

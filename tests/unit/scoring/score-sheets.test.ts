@@ -16,7 +16,7 @@ const pts = (n: number): Mark => ({ kind: "points", points: n });
 const word = (level: string): Mark => ({ kind: "word", level });
 const NA: Mark = { kind: "na" };
 
-// The level names are seen on published sheets (TRADE.md, "Judging": Excellent / Good / Satisfactory /
+// The level names are seen on published sheets (common practice: Excellent / Good / Satisfactory /
 // Needs improvement / N/A); the fractions are ours.
 const WORDS: WordLevel[] = [
   { label: "Excellent", fraction: 1 },
@@ -50,8 +50,8 @@ describe("published weightings", () => {
   });
 });
 
-// A wholecloth quilt has no piecing and no appliqué: both are marked N/A, never zero (TRADE.md,
-// "Judging"). The sheet and its weights are invented; they total 100.
+// A wholecloth quilt has no piecing and no appliqué: both are marked N/A, never zero (common
+// practice on published judging sheets). The sheet and its weights are invented; they total 100.
 const wholeclothSheet: ScoreSheet = {
   sections: [
     { id: "general", title: "General appearance", criteria: [points("visual", "Visual impact", 20)] },
