@@ -2,7 +2,8 @@
 // their entries to the one they were merged into, the facts of an entry as the engine wants them,
 // the moves a changed set would make, and the intake re-measure against the show's tolerance.
 // Pure: the chair's editor runs the same code in the browser to preview what the server will do.
-import { checkRuleSet, compileRules, decideCompiled, type CategoryRef, type CategoryRule, type Decision, type DecideOptions, type EntryFacts, type RuleSetCheck } from "./categories";
+import { checkRuleSet, type RuleSetCheck } from "./category-checks";
+import { compileRules, decideCompiled, type CategoryRef, type CategoryRule, type Decision, type DecideOptions, type EntryFacts } from "./categories";
 import { formatInches, UM_PER_INCH } from "./units";
 
 /** A stored category: the rule plus, after a merge, the id of the category that took it over. */

@@ -2,8 +2,9 @@
 // reasons, the overlap option, rule-set checks and the editor's preview.
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
+import { checkRuleSet } from "@/scoring/category-checks";
 import {
-  checkRuleSet, decideAll, decideCategory, explainCategory, previewRule,
+  decideAll, decideCategory, explainCategory, previewRule,
   type Bound, type CategoryRule, type Condition, type Decision, type EntryFacts, type Measure,
 } from "@/scoring/categories";
 import { parseLength } from "@/scoring/measure";

@@ -1,7 +1,8 @@
 // The starter category sets: no gaps, no overlaps, exactly one category for every plausible entry.
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { checkRuleSet, decideAll, decideCategory, type EntryFacts } from "@/scoring/categories";
+import { checkRuleSet } from "@/scoring/category-checks";
+import { decideAll, decideCategory, type EntryFacts } from "@/scoring/categories";
 import { GUILD_STARTER, loadStarterSet, REGIONAL_STARTER, STARTER_SETS } from "@/scoring/starter-sets";
 import { DEMO_TECHNIQUES, demoScenario } from "@/db/seed/demo-data";
 
