@@ -3,7 +3,8 @@
 // the tie-break chain, places and ribbons, the chair's changes, the show-wide awards, and what
 // still blocks publishing. Pure: the server, the review screen and the tests run the same code.
 import { combinationProblems, decideAwards, type AwardCandidate, type AwardDefinition, type AwardOutcome, type AwardPickInput, type RibbonStyle } from "./awards";
-import { ordinal, placeAwards, rankCategory, type Direction, type NotAwarded, type RankCandidate, type RankedEntry, type SizeRule, type TieBreak, type TieRule } from "./ranking";
+import { placeAwards, type NotAwarded, type SizeRule, type TieRule } from "./placements";
+import { ordinal, rankCategory, type Direction, type RankCandidate, type RankedEntry, type TieBreak } from "./ranking";
 import { formatScore } from "./score-sheets";
 
 /** A link of the show's tie-break chain. */

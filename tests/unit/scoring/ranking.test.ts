@@ -4,9 +4,10 @@
 import fc from "fast-check";
 import * as ss from "simple-statistics";
 import { describe, expect, it } from "vitest";
+import { placeAwards, placesFor, type PlaceRules } from "@/scoring/placements";
 import {
-  competitionRanks, firstPlaceVotes, ordinal, placeAwards, placesFor, rankCategory, severityAdjusted, summariseEntries, summariseScores,
-  type JudgeTotal, type PlaceRules, type RankCandidate, type TieBreak,
+  competitionRanks, firstPlaceVotes, ordinal, rankCategory, severityAdjusted, summariseEntries, summariseScores,
+  type JudgeTotal, type RankCandidate, type TieBreak,
 } from "@/scoring/ranking";
 import { formatScore } from "@/scoring/score-sheets";
 
