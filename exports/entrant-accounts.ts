@@ -12,7 +12,7 @@
 //   (late fee by today's date), counted as due and outstanding.
 // The per-entrant cap counts entry fees for entries still in the show, card and offline alike,
 // in entry-number order.
-import { isGuildMember, quoteFees, feeKindOf, type FeeEntry, type FeeSchedule } from "../scoring/fees";
+import { isGuildMember, quoteFees, type FeeEntry, type FeeKind, type FeeSchedule } from "../scoring/fees";
 
 export type AccountEntry = {
   id: string;
@@ -30,7 +30,7 @@ export type AccountPayment = {
   amountCents: number;
   refundedCents: number;
   paidAt: Date | null;
-  items: { entryId: string; amountCents: number; description: string }[];
+  items: { entryId: string; amountCents: number; kind: FeeKind; description: string }[];
 };
 
 export type EntrantFacts = {
@@ -95,7 +95,7 @@ function cardTotals(facts: Pick<EntrantFacts, "entries" | "payments">) {
     netCents: charged.reduce((s, p) => s + p.amountCents - p.refundedCents, 0),
     refundedCents: charged.reduce((s, p) => s + p.refundedCents, 0),
     entryIds: new Set(items.map((i) => i.entryId)),
-    capCountedCents: items.filter((i) => inShow.has(i.entryId) && feeKindOf(i.description) === "entry").reduce((s, i) => s + i.amountCents, 0),
+    capCountedCents: items.filter((i) => inShow.has(i.entryId) && i.kind === "entry").reduce((s, i) => s + i.amountCents, 0),
     lastPaidAt: latest(charged.filter((p) => p.amountCents > 0).map((p) => p.paidAt)),
   };
 }

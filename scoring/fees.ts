@@ -15,7 +15,7 @@ export type FeeSchedule = {
 
 export type FeeKind = "entry" | "late" | "critique";
 
-/** Stored as the start of each payment line's description, so a line's kind can be read back. */
+/** The start of each payment line's description (the line's kind is stored in its own column). */
 export const FEE_KIND_LABELS: Record<FeeKind, string> = {
   entry: "Entry fee",
   late: "Late fee",
@@ -87,14 +87,6 @@ export function quoteFees(input: {
   }
   const totalCents = lines.reduce((sum, l) => sum + l.amountCents, 0);
   return { member, late, lines, entryFeesCents, capSavingCents, totalCents };
-}
-
-/** The kind of a stored payment line, read back from its description (see FEE_KIND_LABELS). */
-export function feeKindOf(description: string): FeeKind | null {
-  for (const [kind, label] of Object.entries(FEE_KIND_LABELS) as [FeeKind, string][]) {
-    if (description.startsWith(label)) return kind;
-  }
-  return null;
 }
 
 /** Refund on withdrawal: the show's percent of the entry fee charged for that entry, rounded down to the cent. */

@@ -61,7 +61,7 @@ async function paymentsOf(showId: string): Promise<Map<string, AccountPayment[]>
       .from(payments)
       .where(eq(payments.showId, showId)),
     db
-      .select({ paymentId: paymentItems.paymentId, entryId: paymentItems.entryId, amountCents: paymentItems.amountCents, description: paymentItems.description })
+      .select({ paymentId: paymentItems.paymentId, entryId: paymentItems.entryId, amountCents: paymentItems.amountCents, kind: paymentItems.kind, description: paymentItems.description })
       .from(paymentItems)
       .innerJoin(payments, eq(payments.id, paymentItems.paymentId))
       .where(eq(payments.showId, showId)),

@@ -82,7 +82,7 @@ async function entryFeesPaidCents(reader: Pick<Tx, "select">, userId: string, sh
       .from(payments)
       .where(and(eq(payments.entrantUserId, userId), eq(payments.showId, showId), inArray(payments.status, [...CHARGED]))),
     reader
-      .select({ paymentId: paymentItems.paymentId, entryId: paymentItems.entryId, amountCents: paymentItems.amountCents, description: paymentItems.description })
+      .select({ paymentId: paymentItems.paymentId, entryId: paymentItems.entryId, amountCents: paymentItems.amountCents, kind: paymentItems.kind, description: paymentItems.description })
       .from(paymentItems)
       .innerJoin(payments, eq(payments.id, paymentItems.paymentId))
       .where(and(eq(payments.entrantUserId, userId), eq(payments.showId, showId), inArray(payments.status, [...CHARGED]))),
@@ -203,7 +203,7 @@ export async function startCheckout(viewer: Viewer, input: { showSlug: string; e
     );
     if (!session.url) throw new Error(`checkout session ${session.id} came back without a URL`);
     await tx.insert(payments).values({ id: paymentId, showId: show.id, entrantUserId: viewer.id, checkoutSessionId: session.id, amountCents: quote.totalCents, currency: settings.currency, status: "open" });
-    await tx.insert(paymentItems).values(quote.lines.map((l) => ({ paymentId, entryId: l.entryId, amountCents: l.amountCents, description: l.description })));
+    await tx.insert(paymentItems).values(quote.lines.map((l) => ({ paymentId, entryId: l.entryId, amountCents: l.amountCents, kind: l.kind, description: l.description })));
     await writeAudit(tx, {
       actorUserId: viewer.id,
       showId: show.id,

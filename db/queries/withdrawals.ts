@@ -11,18 +11,18 @@ import { formatDateTime } from "@/components/format/dates";
 import { conflict, notFound } from "@/lib/errors";
 import { stripe } from "@/lib/payments";
 import type { Viewer } from "@/lib/session";
-import { feeKindOf, formatMoney, withdrawalRefundCents } from "@/scoring/fees";
+import { formatMoney, withdrawalRefundCents } from "@/scoring/fees";
 
 const WITHDRAWABLE = new Set(["submitted", "paid", "accepted"]);
 
 /** The refund a withdrawal would give now: the show's percent of the entry fee charged by card. */
 export async function refundIfWithdrawn(reader: Pick<Tx, "select">, entryId: string, refundPercent: number) {
   const lines = await reader
-    .select({ paymentId: payments.id, amountCents: paymentItems.amountCents, description: paymentItems.description })
+    .select({ paymentId: payments.id, amountCents: paymentItems.amountCents, kind: paymentItems.kind })
     .from(paymentItems)
     .innerJoin(payments, eq(payments.id, paymentItems.paymentId))
     .where(and(eq(paymentItems.entryId, entryId), inArray(payments.status, ["paid", "partially_refunded"])));
-  const entryFee = lines.find((l) => feeKindOf(l.description) === "entry");
+  const entryFee = lines.find((l) => l.kind === "entry");
   if (!entryFee) return null;
   return { paymentId: entryFee.paymentId, refundCents: withdrawalRefundCents(entryFee.amountCents, refundPercent) };
 }

@@ -39,6 +39,9 @@ export const payments = pgTable(
   (t) => [index("payments_entrant").on(t.entrantUserId)],
 );
 
+/** What a payment line is for; the per-entrant cap counts "entry" lines only. */
+export const feeKind = pgEnum("fee_kind", ["entry", "late", "critique"]);
+
 export const paymentItems = pgTable(
   "payment_items",
   {
@@ -51,6 +54,7 @@ export const paymentItems = pgTable(
       .references(() => entries.id, { onDelete: "cascade" }),
     /** What this entry costs in this checkout: entry fee (or its share under the cap), late and critique fees. */
     amountCents: integer().notNull(),
+    kind: feeKind().notNull(),
     description: text().notNull(),
   },
   (t) => [index("payment_items_entry").on(t.entryId)],

@@ -88,8 +88,8 @@ beforeAll(async () => {
   const refundedIds = values.slice(0, 4).map((v) => v.id);
   const [paid] = await db.insert(payments).values({ showId: show.id, entrantUserId: people[0]!.id, amountCents: 4000, currency: "usd", status: "paid", paidAt: new Date(base) }).returning();
   const [back] = await db.insert(payments).values({ showId: show.id, entrantUserId: people[0]!.id, amountCents: 4000, refundedCents: 4000, currency: "usd", status: "refunded", paidAt: new Date(base) }).returning();
-  await db.insert(paymentItems).values(values.slice(4, 10).map((v) => ({ paymentId: paid!.id, entryId: v.id, amountCents: 1000, description: "Entry fee" })));
-  await db.insert(paymentItems).values(refundedIds.map((id) => ({ paymentId: back!.id, entryId: id, amountCents: 1000, description: "Entry fee" })));
+  await db.insert(paymentItems).values(values.slice(4, 10).map((v) => ({ paymentId: paid!.id, entryId: v.id, amountCents: 1000, kind: "entry" as const, description: "Entry fee" })));
+  await db.insert(paymentItems).values(refundedIds.map((id) => ({ paymentId: back!.id, entryId: id, amountCents: 1000, kind: "entry" as const, description: "Entry fee" })));
 
   expected = values.map((v) => ({
     id: v.id,

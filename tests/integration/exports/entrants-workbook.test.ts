@@ -29,7 +29,12 @@ async function person(name: string, profile?: Partial<typeof entrantProfiles.$in
 async function cardPayment(entrantUserId: string, lines: [string, number, string][], fields: Partial<typeof payments.$inferInsert> = {}) {
   const amountCents = lines.reduce((s, [, c]) => s + c, 0);
   const [p] = await db.insert(payments).values({ showId: show.id, entrantUserId, amountCents, currency: "usd", status: "paid", paidAt: cardPaidAt, ...fields }).returning();
-  await db.insert(paymentItems).values(lines.map(([entryId, amount, description]) => ({ paymentId: p!.id, entryId, amountCents: amount, description })));
+  await db.insert(paymentItems).values(lines.map(([entryId, amount, description]) => ({ paymentId: p!.id, entryId, amountCents: amount, kind: kindOf(description), description })));
+}
+
+/** A line's kind from the start of its description, as checkout words it. */
+function kindOf(description: string): "entry" | "late" | "critique" {
+  return description.startsWith("Late fee") ? "late" : description.startsWith("Critique fee") ? "critique" : "entry";
 }
 
 async function download(who: TestUser | null) {

@@ -53,8 +53,8 @@ beforeAll(async () => {
   });
   const [paid] = await db.insert(payments).values({ showId: show.id, entrantUserId: id, amountCents: 3500, currency: "usd", status: "paid", paidAt: submittedAt }).returning();
   await db.insert(paymentItems).values([
-    { paymentId: paid!.id, entryId: first.id, amountCents: 2500, description: "Entry fee" },
-    { paymentId: paid!.id, entryId: first.id, amountCents: 1000, description: "Critique" },
+    { paymentId: paid!.id, entryId: first.id, amountCents: 2500, kind: "entry", description: "Entry fee" },
+    { paymentId: paid!.id, entryId: first.id, amountCents: 1000, kind: "critique", description: "Critique" },
   ]);
   await makeEntry(show.id, id, { entryNumber: 102, title: "Tide Chart", widthUm: cmToUm(150), lengthUm: cmToUm(200), division: "youth", judged: false, status: "submitted", submittedAt: new Date("2027-03-01T18:00:00Z") });
   for (let i = 0; i < 40; i++) await makeEntry(show.id, id, { entryNumber: 103 + i, title: `Filler ${i}`, status: "accepted", submittedAt });

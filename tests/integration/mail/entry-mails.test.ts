@@ -76,8 +76,8 @@ describe("sendPaymentReceiptMail", () => {
     const e = await makeEntry(show.id, entrant.id, { title: "Ocean Waves", status: "paid", paymentReference: "card pi_test_receipt" });
     const [p] = await db.insert(payments).values({ showId: show.id, entrantUserId: entrant.id, amountCents: 3000, currency: "usd", status: "paid", paidAt: new Date() }).returning();
     await db.insert(paymentItems).values([
-      { paymentId: p!.id, entryId: e.id, amountCents: 2000, description: `Entry fee — entry ${e.entryNumber}: Ocean Waves` },
-      { paymentId: p!.id, entryId: e.id, amountCents: 1000, description: `Critique fee — entry ${e.entryNumber}: Ocean Waves` },
+      { paymentId: p!.id, entryId: e.id, amountCents: 2000, kind: "entry", description: `Entry fee — entry ${e.entryNumber}: Ocean Waves` },
+      { paymentId: p!.id, entryId: e.id, amountCents: 1000, kind: "critique", description: `Critique fee — entry ${e.entryNumber}: Ocean Waves` },
     ]);
     await sendPaymentReceiptMail(p!.id);
     const mail = await waitForMail(env.MAIL_WEB_URL, { to: entrant.email, subjectIncludes: "Payment received", timeoutMs: 10_000 });

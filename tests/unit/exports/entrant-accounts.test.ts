@@ -20,8 +20,12 @@ const entry = (n: number, fields: Partial<AccountEntry> = {}): AccountEntry => (
 const cardPaid = (n: number, at = early, fields: Partial<AccountEntry> = {}) => entry(n, { status: "paid", paidAt: at, paymentReference: "card pi_test", ...fields });
 const payment = (items: [number, number, string][], fields: Partial<AccountPayment> = {}): AccountPayment => ({
   status: "paid", amountCents: items.reduce((s, [, c]) => s + c, 0), refundedCents: 0, paidAt: early,
-  items: items.map(([n, amountCents, description]) => ({ entryId: `e${n}`, amountCents, description })), ...fields,
+  items: items.map(([n, amountCents, description]) => ({ entryId: `e${n}`, amountCents, kind: kindOf(description), description })), ...fields,
 });
+/** A line's kind from the start of its description, as checkout words it. */
+function kindOf(description: string): "entry" | "late" | "critique" {
+  return description.startsWith("Late fee") ? "late" : description.startsWith("Critique fee") ? "critique" : "entry";
+}
 const person = (entries: AccountEntry[], payments: AccountPayment[] = [], fields: Partial<EntrantFacts> = {}): EntrantFacts => ({
   name: "Wren Castellano", email: "wren@example.test", phone: "555-0101", addressLine1: "14 Loom Street", addressLine2: "", city: "Millbrook", region: "WI",
   postalCode: "53000", country: "US", guild: "", publishNameConsent: true, entries, payments, ...fields,

@@ -2,7 +2,7 @@
 // Fee shapes (member/non-member rates, caps per entrant, critique add-ons) are common practice
 // at guild shows (common practice); the amounts here are invented.
 import { describe, expect, it } from "vitest";
-import { feeKindOf, formatMoney, isGuildMember, isLate, quoteFees, withdrawalRefundCents, type FeeSchedule } from "@/scoring/fees";
+import { formatMoney, isGuildMember, isLate, quoteFees, withdrawalRefundCents, type FeeSchedule } from "@/scoring/fees";
 
 const schedule: FeeSchedule = {
   entryFeeCents: 2500,
@@ -84,8 +84,8 @@ describe("quoteFees", () => {
 
   it("stores lines whose kind can be read back", () => {
     const q = quoteFees({ schedule, member: false, at: late, entries: [entry(5, true)], entryFeesAlreadyPaidCents: 0 });
-    expect(q.lines.map((l) => feeKindOf(l.description))).toEqual(["entry", "late", "critique"]);
-    expect(feeKindOf("Something else")).toBeNull();
+    expect(q.lines.map((l) => l.kind)).toEqual(["entry", "late", "critique"]);
+    expect(q.lines.map((l) => l.description.split(" — ")[0])).toEqual(["Entry fee", "Late fee", "Critique fee"]);
   });
 });
 
