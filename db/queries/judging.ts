@@ -208,11 +208,10 @@ export async function syncSheetChanges(viewer: Viewer, slug: string, batch: Sync
   const show = await requireShowRole(viewer, slug, AREA_ROLES.judging);
   // Sheets take changes only while the show is judging; the tablet keeps them until then.
   if (show.status !== "judging") throw conflict(show.status === "results_published" || show.status === "archived" ? "Judging is over at this show; sheets are closed." : "Judging hasn't started at this show yet; changes stay on this device until it does.");
-  const { judges } = await scoringRights(db, show.showId, viewer.id);
+  // Independent reads in parallel: a tablet on poor Wi-Fi waits for the slowest one, not the sum.
+  const [{ judges }, settings, sheets] = await Promise.all([scoringRights(db, show.showId, viewer.id), settingsForShowId(show.showId), sheetsOfShow(db, show.showId)]);
   const rights = judges.get(batch.forJudge);
   if (!rights) throw forbiddenError(batch.forJudge === viewer.id ? "You are not on a judging panel of this show." : "You can enter scores only for a judge on your panel.");
-  const settings = await settingsForShowId(show.showId);
-  const sheets = await sheetsOfShow(db, show.showId);
   const byEntry = new Map<string, SyncBatch["changes"]>();
   for (const c of batch.changes) byEntry.set(c.entryId, [...(byEntry.get(c.entryId) ?? []), c]);
 
