@@ -1,6 +1,7 @@
 "use client";
 // Publishing: what still blocks it, then Publish (a reason when publishing again); once out,
 // Unpublish with a reason. Every publication is listed with its reasons.
+import { useState } from "react";
 import { Mail, Megaphone, Undo2 } from "lucide-react";
 import { ActionForm, useActionForm } from "@/components/forms/action-form";
 import { formatDateTime } from "@/components/format/dates";
@@ -16,8 +17,13 @@ type MailStatus = { sent: number; failed: number; lastError: string } | null;
 type Props = { showSlug: string; timeZone: string; status: string; blockers: string[]; warnings: string[]; publications: Publication[]; current: Publication | null; mailStatus: MailStatus };
 
 export function PublishPanel({ showSlug, timeZone, status, blockers, warnings, publications, current, mailStatus }: Props) {
+  // Publishing swaps the publish form for the unpublish form, so the outcome (how many entrants
+  // were mailed) is kept here, where it survives the swap.
+  const [done, setDone] = useState<string | null>(null);
+  const onDone = (r: { message?: string }) => setDone(r.message ?? null);
   return (
     <div className="space-y-4">
+      <p role="status" className={done ? "rounded-control border border-success-700/30 bg-success-50 p-3 font-semibold text-success-700" : "sr-only"}>{done}</p>
       {current ? (
         <Alert tone="success" title={`Version ${current.version} is published`}>
           The public results page and each entrant&apos;s results and judges&apos; comments are visible. <a href={`/shows/${showSlug}/results`}>Open the public results page</a>.
@@ -33,7 +39,7 @@ export function PublishPanel({ showSlug, timeZone, status, blockers, warnings, p
       )}
       {warnings.length ? <Alert tone="warning" title="Worth a look"><ul className="list-disc pl-5">{warnings.map((w) => <li key={w}>{w}</li>)}</ul></Alert> : null}
       {current && mailStatus ? <MailLine showSlug={showSlug} status={mailStatus} /> : null}
-      {current ? <UnpublishForm showSlug={showSlug} /> : status === "judging" ? <PublishForm showSlug={showSlug} again={publications.length > 0} blocked={blockers.length > 0} /> : null}
+      {current ? <UnpublishForm showSlug={showSlug} onDone={onDone} /> : status === "judging" ? <PublishForm showSlug={showSlug} again={publications.length > 0} blocked={blockers.length > 0} onDone={onDone} /> : null}
       {publications.length ? (
         <div>
           <h3 className="text-lg">Publications</h3>
@@ -51,8 +57,10 @@ export function PublishPanel({ showSlug, timeZone, status, blockers, warnings, p
   );
 }
 
-function PublishForm({ showSlug, again, blocked }: { showSlug: string; again: boolean; blocked: boolean }) {
-  const ctl = useActionForm({ schema: publishSchema, defaultValues: { reason: "" }, action: (v) => publishResultsAction(null, { ...v, showSlug }) });
+type Done = (r: { message?: string }) => void;
+
+function PublishForm({ showSlug, again, blocked, onDone }: { showSlug: string; again: boolean; blocked: boolean; onDone: Done }) {
+  const ctl = useActionForm({ schema: publishSchema, defaultValues: { reason: "" }, action: (v) => publishResultsAction(null, { ...v, showSlug }), onSuccess: onDone });
   return (
     <ActionForm controller={ctl} aria-label="Publish the results" className="space-y-3">
       {again ? <TextareaField label="Why publish again?" hint="Required; it goes in the audit log and in the mail to entrants whose results changed." rows={2} error={ctl.errorOf("reason")} {...ctl.form.register("reason")} /> : null}
@@ -63,8 +71,8 @@ function PublishForm({ showSlug, again, blocked }: { showSlug: string; again: bo
   );
 }
 
-function UnpublishForm({ showSlug }: { showSlug: string }) {
-  const ctl = useActionForm({ schema: unpublishSchema, defaultValues: { reason: "" }, action: (v) => unpublishResultsAction(null, { ...v, showSlug }) });
+function UnpublishForm({ showSlug, onDone }: { showSlug: string; onDone: Done }) {
+  const ctl = useActionForm({ schema: unpublishSchema, defaultValues: { reason: "" }, action: (v) => unpublishResultsAction(null, { ...v, showSlug }), onSuccess: onDone });
   return (
     <ActionForm controller={ctl} aria-label="Unpublish the results" className="space-y-3 rounded-control border border-line bg-paper-50 p-3">
       <TextareaField label="Reason to take the results down" hint="Required and audited. The public page and entrants see nothing until you publish again." rows={2} error={ctl.errorOf("reason")} {...ctl.form.register("reason")} />
