@@ -9,6 +9,7 @@ import { CategoryReview } from "@/components/results/category-review";
 import { PublishPanel } from "@/components/results/publish-panel";
 import { ResultRulesForm } from "@/components/results/rules-form";
 import { guardQuery, pageViewer } from "@/components/shell/guard";
+import { Alert } from "@/components/ui/alert";
 import { Card, CardHeader } from "@/components/ui/card";
 import { PageHeader } from "@/components/ui/page-header";
 import { SectionLinks } from "@/components/ui/section-links";
@@ -78,7 +79,10 @@ export default async function ResultsPage({ params }: Props) {
 
       <Card aria-labelledby="exports">
         <CardHeader id="exports" title="Spreadsheets and printouts" description="Made from the current results (published or not); entrants' names appear only on the committee's spreadsheets." />
-        <ul className="grid gap-2 sm:grid-cols-2">
+        <Alert tone="warning" title="Personal data">
+          The entrants spreadsheet holds names, addresses, phone numbers and payments, and the awards list names the makers. Share them only with the committee and delete copies after the show.
+        </Alert>
+        <ul className="mt-4 grid gap-2 sm:grid-cols-2">
           {EXPORTS.map(([path, label, kind]) => (
             <li key={path}>
               <a href={`/api/shows/${slug}/exports/${path}`} className="inline-flex min-h-tap items-center gap-2" download>
