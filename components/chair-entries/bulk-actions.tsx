@@ -2,12 +2,13 @@
 // What the chair can do to the chosen rows at once: accept, decline with a reason (required),
 // or record a cash/cheque payment with its reference (required).
 import { useState, useTransition } from "react";
-import { Ban, Banknote, CircleCheck, X } from "lucide-react";
+import { Ban, Banknote, CircleCheck } from "lucide-react";
 import { ActionForm, FormStatusAlert, useActionForm, type FormStatus } from "@/components/forms/action-form";
 import { Button } from "@/components/ui/button";
 import { TextareaField, TextField } from "@/components/ui/field";
 import { declineEntriesSchema, markPaidOfflineSchema } from "@/lib/schemas/chair-entries";
 import { acceptEntriesAction, declineEntriesAction, markPaidOfflineAction } from "@/app/(chair)/shows/[slug]/manage/entries/actions";
+import { SubmitOrCancel } from "@/components/forms/submit-or-cancel";
 
 type Props = { showSlug: string; juried: boolean; entryIds: string[]; onDone: () => void };
 type Panel = "none" | "decline" | "paid";
@@ -69,14 +70,9 @@ function DeclineForm({ showSlug, entryIds, onDone, onCancel }: FormProps) {
   return (
     <ActionForm controller={ctl} aria-label="Decline the chosen entries" className="max-w-xl">
       <TextareaField label="Reason for declining" hint="The entrant reads this in the decision e-mail." required error={ctl.errorOf("reason")} {...ctl.form.register("reason")} />
-      <div className="flex flex-wrap gap-3">
-        <Button type="submit" variant="danger" pending={ctl.pending} pendingLabel="Declining…">
-          Decline {entryIds.length} {entryIds.length === 1 ? "entry" : "entries"}
-        </Button>
-        <Button variant="ghost" onClick={onCancel} icon={<X aria-hidden className="size-5" />}>
-          Cancel
-        </Button>
-      </div>
+      <SubmitOrCancel variant="danger" pending={ctl.pending} pendingLabel="Declining…" onCancel={onCancel}>
+        Decline {entryIds.length} {entryIds.length === 1 ? "entry" : "entries"}
+      </SubmitOrCancel>
     </ActionForm>
   );
 }
@@ -91,14 +87,9 @@ function PaidForm({ showSlug, entryIds, onDone, onCancel }: FormProps) {
   return (
     <ActionForm controller={ctl} aria-label="Mark the chosen entries paid offline" className="max-w-xl">
       <TextField label="Cash or cheque reference" hint="For example “cash, receipt 17” or “cheque 1042”." autoComplete="off" required error={ctl.errorOf("reference")} {...ctl.form.register("reference")} />
-      <div className="flex flex-wrap gap-3">
-        <Button type="submit" pending={ctl.pending} pendingLabel="Saving…">
-          Mark {entryIds.length} paid
-        </Button>
-        <Button variant="ghost" onClick={onCancel} icon={<X aria-hidden className="size-5" />}>
-          Cancel
-        </Button>
-      </div>
+      <SubmitOrCancel pending={ctl.pending} pendingLabel="Saving…" onCancel={onCancel}>
+        Mark {entryIds.length} paid
+      </SubmitOrCancel>
     </ActionForm>
   );
 }

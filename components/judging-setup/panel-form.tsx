@@ -6,11 +6,11 @@ import { useState } from "react";
 import type { UseFormRegisterReturn } from "react-hook-form";
 import { Save, TriangleAlert } from "lucide-react";
 import { ActionForm, useActionForm } from "@/components/forms/action-form";
-import { Button } from "@/components/ui/button";
 import { FieldError, TextField } from "@/components/ui/field";
 import { panelSchema } from "@/lib/schemas/judging";
 import { savePanelAction } from "@/app/(chair)/shows/[slug]/manage/judging/actions";
 import type { ActionResult } from "@/lib/action";
+import { SubmitOrCancel } from "@/components/forms/submit-or-cancel";
 
 export type Person = { userId: string; name: string; email: string };
 export type PanelValues = { id?: string; name: string; day: string; room: string; judgeIds: string[]; scribeIds: string[]; categoryIds: string[] };
@@ -81,16 +81,9 @@ export function PanelForm({ showSlug, values, judges, scribes, categories, onSav
           <FieldError message={ctl.errorOf("categoryIds")} />
         </fieldset>
       </div>
-      <div className="flex flex-wrap gap-2">
-        <Button type="submit" pending={ctl.pending} pendingLabel="Saving…" icon={<Save aria-hidden className="size-5" />}>
-          Save panel
-        </Button>
-        {onCancel ? (
-          <Button variant="ghost" onClick={onCancel}>
-            Cancel
-          </Button>
-        ) : null}
-      </div>
+      <SubmitOrCancel pending={ctl.pending} pendingLabel="Saving…" icon={<Save aria-hidden className="size-5" />} onCancel={onCancel}>
+        Save panel
+      </SubmitOrCancel>
     </ActionForm>
   );
 }

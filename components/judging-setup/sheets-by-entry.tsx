@@ -14,6 +14,7 @@ import { reopenSchema } from "@/lib/schemas/judging";
 import { formatScore } from "@/scoring/score-sheets";
 import { reopenSheetAction, sheetHistoryAction, type SheetHistoryRow } from "@/app/(chair)/shows/[slug]/manage/judging/actions";
 import { progressKeys, type BoardSheet } from "./progress-queries";
+import { SubmitOrCancel } from "@/components/forms/submit-or-cancel";
 
 type Props = { showSlug: string; sheets: BoardSheet[]; categories: { id: string; name: string }[]; timeZone: string };
 
@@ -100,14 +101,9 @@ function ReopenForm({ showSlug, sheet, onDone }: { showSlug: string; sheet: Boar
   return (
     <ActionForm controller={ctl} aria-label={`Reopen the sheet of ${sheet.judgeName}`} className="space-y-3 rounded-control border border-line bg-paper-50 p-3">
       <TextareaField label="Why reopen it?" hint={`${sheet.judgeName} can change the sheet again; the reason goes in the audit log.`} rows={2} error={ctl.errorOf("reason")} {...ctl.form.register("reason")} />
-      <div className="flex flex-wrap gap-2">
-        <Button type="submit" pending={ctl.pending} pendingLabel="Reopening…">
-          Reopen the sheet
-        </Button>
-        <Button variant="ghost" onClick={onDone}>
-          Cancel
-        </Button>
-      </div>
+      <SubmitOrCancel pending={ctl.pending} pendingLabel="Reopening…" onCancel={onDone}>
+        Reopen the sheet
+      </SubmitOrCancel>
     </ActionForm>
   );
 }

@@ -9,6 +9,7 @@ import { SelectField, TextareaField } from "@/components/ui/field";
 import { clearPlacementSchema, placementSchema } from "@/lib/schemas/results";
 import { ordinal } from "@/scoring/ranking";
 import { clearPlacementAction, overridePlacementAction } from "@/app/(chair)/shows/[slug]/manage/results/actions";
+import { SubmitOrCancel } from "@/components/forms/submit-or-cancel";
 
 type Props = { showSlug: string; entryId: string; entryNumber: number; places: number; current: string; overridden: boolean; disabled: boolean };
 
@@ -53,14 +54,9 @@ function ChangeForm({ showSlug, entryId, entryNumber, places, current, onDone }:
         <option value="none">No placement</option>
       </SelectField>
       <TextareaField label="Reason" hint="Required; it goes in the audit log, e.g. “Judges' discussion: binding flaw found on re-inspection”." rows={2} error={ctl.errorOf("reason")} {...ctl.form.register("reason")} />
-      <div className="flex flex-wrap gap-2">
-        <Button type="submit" pending={ctl.pending} pendingLabel="Saving…">
-          Save the change
-        </Button>
-        <Button variant="ghost" onClick={onDone}>
-          Cancel
-        </Button>
-      </div>
+      <SubmitOrCancel pending={ctl.pending} pendingLabel="Saving…" onCancel={onDone}>
+        Save the change
+      </SubmitOrCancel>
     </ActionForm>
   );
 }
