@@ -1,5 +1,5 @@
 // POST: a presigned upload URL for one photo of an entry (the file goes straight to storage).
-import { presignEntryPhoto } from "@/db/queries/entries";
+import { presignEntryPhoto } from "@/db/queries/entry-photos";
 import { defineRoute } from "@/lib/api";
 import { presignPhotoSchema } from "@/lib/schemas/entry";
 

@@ -1,6 +1,6 @@
 // GET: one entry photo's bytes, to the entrant who owns it and the show's team only. Photos live
 // in a private bucket; no public URL ever leaves the server.
-import { photoForViewer } from "@/db/queries/entries";
+import { photoForViewer } from "@/db/queries/entry-photos";
 import { defineRoute } from "@/lib/api";
 import { notFound } from "@/lib/errors";
 import { photoResponse } from "@/lib/photo-response";

@@ -1,5 +1,5 @@
 // POST: checks an uploaded photo and makes it the entry's photo for that view.
-import { attachEntryPhoto } from "@/db/queries/entries";
+import { attachEntryPhoto } from "@/db/queries/entry-photos";
 import { defineRoute } from "@/lib/api";
 import { notFound } from "@/lib/errors";
 import { attachPhotoSchema, PHOTO_VIEWS, type PhotoView } from "@/lib/schemas/entry";
