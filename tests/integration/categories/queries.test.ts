@@ -7,16 +7,8 @@ import { and, eq } from "drizzle-orm";
 import { beforeEach, describe, expect, it } from "vitest";
 import { db } from "@/db/client";
 import { auditLog, categories, entries, shows } from "@/db/schema";
-import {
-  admitFromWaitlist,
-  categoryEditor,
-  categoryQueue,
-  overrideEntryCategory,
-  recordMeasurement,
-  reviewSizeFlag,
-  saveCategorySet,
-  updateSizeTolerance,
-} from "@/db/queries/categories";
+import { categoryEditor, saveCategorySet } from "@/db/queries/categories";
+import { admitFromWaitlist, categoryQueue, overrideEntryCategory, recordMeasurement, reviewSizeFlag, updateSizeTolerance } from "@/db/queries/category-queue";
 import { changeShowStatus } from "@/db/queries/settings";
 import { saveQuiltAction, submitEntryAction } from "@/app/(entrant)/entries/[id]/actions";
 import { categorySetSchema, type CategorySetInput } from "@/lib/schemas/categories";

@@ -2,7 +2,7 @@
 // The intake desk's actions: recording the size a quilt measures at drop-off.
 import { revalidatePath } from "next/cache";
 import { z } from "zod";
-import { recordMeasurement } from "@/db/queries/categories";
+import { recordMeasurement } from "@/db/queries/category-queue";
 import { defineAction } from "@/lib/action";
 import { measureSchema } from "@/lib/schemas/categories";
 

@@ -4,14 +4,8 @@
 // Each query checks the chair role and the judging lock itself.
 import { revalidatePath } from "next/cache";
 import { z } from "zod";
-import {
-  admitFromWaitlist,
-  overrideEntryCategory,
-  reviewSizeFlag,
-  saveCategorySet,
-  updateSizeTolerance,
-  type SaveSetResult,
-} from "@/db/queries/categories";
+import { saveCategorySet, type SaveSetResult } from "@/db/queries/categories";
+import { admitFromWaitlist, overrideEntryCategory, reviewSizeFlag, updateSizeTolerance } from "@/db/queries/category-queue";
 import { defineAction } from "@/lib/action";
 import { admitSchema, categorySetSchema, overrideSchema, reviewSizeSchema, toleranceSchema } from "@/lib/schemas/categories";
 import { formatInches } from "@/scoring/units";

@@ -7,7 +7,8 @@ import { ToleranceForm } from "@/components/categories/tolerance-form";
 import { guardQuery, pageViewer } from "@/components/shell/guard";
 import { Card, CardHeader } from "@/components/ui/card";
 import { PageHeader } from "@/components/ui/page-header";
-import { categoryEditor, categoryQueue } from "@/db/queries/categories";
+import { categoryEditor } from "@/db/queries/categories";
+import { categoryQueue } from "@/db/queries/category-queue";
 
 type Props = { params: Promise<{ slug: string }> };
 
