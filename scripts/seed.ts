@@ -1,11 +1,13 @@
 // `npm run db:seed`: puts the demo show, its people and 120 quilts (with generated photos) into
-// DATABASE_URL and the photo bucket, unless the demo show is already there. Safe to run again.
+// DATABASE_URL and the photo bucket, unless the demo show is already there, and last year's show
+// with its results published. Safe to run again.
 // Reads process.env itself: db/client.ts and lib/env.ts import "server-only", which tsx cannot load.
 import { CreateBucketCommand, HeadBucketCommand, PutObjectCommand, S3Client } from "@aws-sdk/client-s3";
 import { drizzle } from "drizzle-orm/postgres-js";
 import postgres from "postgres";
 import * as schema from "../db/schema";
 import { DEMO_ACCOUNTS, DEMO_PASSWORD, DEMO_SHOW } from "../db/seed/demo-data";
+import { LAST_YEAR_SHOW, seedLastYear } from "../db/seed/demo-last-year";
 import { seedDemo } from "../db/seed/seed-demo";
 
 // The same names and defaults as lib/env.ts.
@@ -98,15 +100,15 @@ async function main(): Promise<void> {
     await ensureBucket(s3, config.s3.bucket);
     const db = drizzle(sql, { schema, casing: "snake_case" });
     const started = performance.now();
-    const { created } = await seedDemo({
-      db,
-      log: say,
-      putPhoto: async (key, body, contentType) => {
-        await s3.send(new PutObjectCommand({ Bucket: config.s3.bucket, Key: key, Body: body, ContentType: contentType }));
-      },
-    });
+    const putPhoto = async (key: string, body: Buffer, contentType: string) => {
+      await s3.send(new PutObjectCommand({ Bucket: config.s3.bucket, Key: key, Body: body, ContentType: contentType }));
+    };
+    const { created } = await seedDemo({ db, log: say, putPhoto });
     const seconds = ((performance.now() - started) / 1000).toFixed(1);
     say(created ? `seeded "${DEMO_SHOW.name}" (/${DEMO_SHOW.slug}) in ${seconds} s` : `"${DEMO_SHOW.name}" was already seeded; nothing changed`);
+    // Last year's show, judged and published, so the results side can be tried at once.
+    const lastYear = await seedLastYear({ db, log: say, putPhoto });
+    if (lastYear.created) say(`seeded "${LAST_YEAR_SHOW.name}" (/${LAST_YEAR_SHOW.slug}/results) with its results published`);
     printAccounts();
   } finally {
     s3.destroy();

@@ -49,7 +49,8 @@ async function loadCategories(reader: Reader, showId: string) {
       .from(entries)
       .where(and(eq(entries.showId, showId), eq(entries.judged, true), notInArray(entries.status, [...JUDGED_OUT]), inArray(entries.categoryState, ["decided", "overridden"])))
       .orderBy(asc(entries.entryNumber)),
-    totalsInSqlWith(db, showId),
+    // Through the same reader, so a publish transaction snapshots what it locked.
+    totalsInSqlWith(reader as Parameters<typeof totalsInSqlWith>[0], showId),
     reader
       .select({ categoryId: panelCategories.categoryId, judgeId: panelMembers.userId, judgeName: user.name })
       .from(panelCategories)

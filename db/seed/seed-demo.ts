@@ -246,7 +246,7 @@ async function demoShowExists(db: SeedDb, slug: string): Promise<boolean> {
  * no new items start, and it waits for those in flight before rejecting, so no upload is still
  * running when the transaction rolls back.
  */
-async function mapLimit<T, R>(items: T[], limit: number, fn: (item: T) => Promise<R>): Promise<R[]> {
+export async function mapLimit<T, R>(items: T[], limit: number, fn: (item: T) => Promise<R>): Promise<R[]> {
   const results = new Array<R>(items.length);
   let next = 0;
   let failed = false;

@@ -13,7 +13,10 @@ import { describe, expect, it } from "vitest";
 import { db } from "@/db/client";
 import * as schema from "@/db/schema";
 import { DEMO_ACCOUNTS, DEMO_PASSWORD, DEMO_SHOW, demoScenario } from "@/db/seed/demo-data";
+import { LAST_YEAR_SHOW, seedLastYear } from "@/db/seed/demo-last-year";
 import { photoKey, seedDemo, type PutPhoto } from "@/db/seed/seed-demo";
+import { loadResultsInput } from "@/db/queries/results";
+import { assembleResults, isAwarded, snapshotOf, type PublishedResults } from "@/scoring/results";
 
 type Tx = Parameters<Parameters<typeof db.transaction>[0]>[0];
 
@@ -62,7 +65,7 @@ async function inRolledBackTransaction(fn: (tx: Tx) => Promise<void>): Promise<v
 
 /** Removes a demo that an earlier `db:seed` committed (only inside the rolled-back transaction). */
 async function clearDemo(tx: Tx): Promise<void> {
-  await tx.delete(schema.shows).where(eq(schema.shows.slug, DEMO_SHOW.slug)); // cascades roles, entries, photos
+  await tx.delete(schema.shows).where(inArray(schema.shows.slug, [DEMO_SHOW.slug, LAST_YEAR_SHOW.slug])); // cascades roles, entries, photos, sheets
   const emails = DEMO_ACCOUNTS.map((a) => a.email);
   const ids = (await tx.select({ id: schema.user.id }).from(schema.user).where(inArray(schema.user.email, emails))).map((r) => r.id);
   if (ids.length === 0) return;
@@ -172,4 +175,36 @@ describe("seedDemo", () => {
       expect(calls).toBeLessThan(10); // it stops starting new uploads after the failure
     });
   }, 60_000);
+
+  it("seeds last year's show judged and published, and the server's own results give the same publication", async () => {
+    await inRolledBackTransaction(async (tx) => {
+      await clearDemo(tx);
+      const spy = photoSpy();
+      await seedDemo({ db: tx, putPhoto: spy.putPhoto });
+      expect(await seedLastYear({ db: tx, putPhoto: spy.putPhoto })).toEqual({ created: true });
+      expect(await seedLastYear({ db: tx, putPhoto: spy.putPhoto })).toEqual({ created: false });
+      const [show] = await tx.select().from(schema.shows).where(eq(schema.shows.slug, LAST_YEAR_SHOW.slug));
+      expect(show!.status).toBe("results_published");
+      const entries = await tx.select().from(schema.entries).where(eq(schema.entries.showId, show!.id));
+      expect(entries).toHaveLength(30);
+      expect(entries.every((e) => e.categoryState === "decided" && e.status === "returned")).toBe(true);
+      const sheets = await tx.select().from(schema.judgeSheets).where(eq(schema.judgeSheets.showId, show!.id));
+      expect(sheets).toHaveLength(2 * 30);
+      expect(sheets.every((s) => s.status === "submitted")).toBe(true);
+      const photos = await tx.select().from(schema.entryPhotos).where(inArray(schema.entryPhotos.entryId, entries.map((e) => e.id)));
+      expect(photos).toHaveLength(2 * 30);
+      for (const p of photos) expect(spy.uploads.has(p.storageKey), p.storageKey).toBe(true);
+
+      // The stored publication is what the chair's Results page computes from the stored sheets.
+      const [pub] = await tx.select().from(schema.resultPublications).where(eq(schema.resultPublications.showId, show!.id));
+      const snapshot = pub!.snapshot as PublishedResults;
+      const { input } = await loadResultsInput(tx, show!.id);
+      const live = assembleResults(input);
+      expect(live.blockers).toEqual([]);
+      expect(snapshotOf(live, 1, pub!.publishedAt)).toEqual(snapshot);
+      const awarded = snapshot.categories.flatMap((c) => c.entries.filter(isAwarded));
+      expect(awarded.length).toBeGreaterThan(5);
+      expect(snapshot.awards.map((a) => [a.name, a.entryIds.length])).toEqual([["Best of Show", 1], ["Judge's choice", 2]]);
+    });
+  }, 180_000);
 });
