@@ -65,7 +65,8 @@ function ShowGroup({ group }: { group: MyShow }) {
           {show.name}
         </Link>
       </h2>
-      {closes ? (
+      {/* Once every quilt is home (or out of the show) there is nothing left to withdraw. */}
+      {closes && group.entries.some((e) => ["draft", "submitted", "paid", "accepted", "waitlisted"].includes(e.status)) ? (
         <p className="text-sm text-ink-muted">
           {group.withdrawOpen
             ? `Entries close ${closes}. Until then you can withdraw an entry here${group.refundPercent > 0 ? ` and get back ${group.refundPercent}% of its entry fee` : ""}.`
