@@ -17,7 +17,7 @@ import { env } from "@/lib/env";
 import { badInput, conflict, notFound } from "@/lib/errors";
 import { stripe } from "@/lib/payments";
 import type { Viewer } from "@/lib/session";
-import { takenSoFar } from "@/exports/entrant-accounts";
+import { takenSoFar, type AccountEntry, type AccountPayment } from "@/exports/entrant-accounts";
 import { isGuildMember, quoteFees, type FeeSchedule } from "@/scoring/fees";
 
 /**
@@ -48,7 +48,6 @@ export async function recordPaymentEvent(
 }
 
 // Statuses in which the money was taken (some may since have been refunded).
-const CHARGED = ["paid", "partially_refunded", "refunded"] as const;
 
 type ShowForFees = { id: string; slug: string; name: string; guildName: string; entryClosesAt: Date | null; timeZone: string };
 
@@ -68,27 +67,43 @@ async function memberAt(reader: Pick<Tx, "select">, userId: string, guildName: s
 }
 
 /**
- * Entry fees the per-entrant cap counts already: paid by card or marked paid offline, for entries
- * still in the show. The same rule as the entrants spreadsheet (exports/entrant-accounts.ts).
+ * A show's sent entries and its payments with their lines, by entrant (only `entrantUserId`'s when
+ * given), as exports/entrant-accounts.ts reads them: for checkout's cap and the entrants spreadsheet.
  */
-async function entryFeesPaidCents(reader: Pick<Tx, "select">, userId: string, showId: string, ctx: { schedule: FeeSchedule; member: boolean }): Promise<number> {
-  const [mine, paid, lines] = await Promise.all([
+export async function accountFactsOf(reader: Pick<Tx, "select">, showId: string, entrantUserId?: string) {
+  const mineOnly = (column: typeof entries.entrantUserId | typeof payments.entrantUserId) => (entrantUserId ? eq(column, entrantUserId) : undefined);
+  const [sent, paid, lines] = await Promise.all([
     reader
-      .select({ id: entries.id, entryNumber: entries.entryNumber, title: entries.title, status: entries.status, waitlisted: entries.waitlisted, critiqueRequested: entries.critiqueRequested, paidAt: entries.paidAt, paymentReference: entries.paymentReference })
+      .select({ id: entries.id, entrantUserId: entries.entrantUserId, entryNumber: entries.entryNumber, title: entries.title, status: entries.status, waitlisted: entries.waitlisted, critiqueRequested: entries.critiqueRequested, paidAt: entries.paidAt, paymentReference: entries.paymentReference })
       .from(entries)
-      .where(and(eq(entries.entrantUserId, userId), eq(entries.showId, showId), ne(entries.status, "draft"))),
+      .where(and(eq(entries.showId, showId), ne(entries.status, "draft"), mineOnly(entries.entrantUserId)))
+      .orderBy(asc(entries.entryNumber), asc(entries.id)),
     reader
-      .select({ id: payments.id, status: payments.status, amountCents: payments.amountCents, refundedCents: payments.refundedCents, paidAt: payments.paidAt })
+      .select({ id: payments.id, entrantUserId: payments.entrantUserId, status: payments.status, amountCents: payments.amountCents, refundedCents: payments.refundedCents, paidAt: payments.paidAt })
       .from(payments)
-      .where(and(eq(payments.entrantUserId, userId), eq(payments.showId, showId), inArray(payments.status, [...CHARGED]))),
+      .where(and(eq(payments.showId, showId), mineOnly(payments.entrantUserId))),
     reader
       .select({ paymentId: paymentItems.paymentId, entryId: paymentItems.entryId, amountCents: paymentItems.amountCents, kind: paymentItems.kind, description: paymentItems.description })
       .from(paymentItems)
       .innerJoin(payments, eq(payments.id, paymentItems.paymentId))
-      .where(and(eq(payments.entrantUserId, userId), eq(payments.showId, showId), inArray(payments.status, [...CHARGED]))),
+      .where(and(eq(payments.showId, showId), mineOnly(payments.entrantUserId))),
   ]);
-  const accountPayments = paid.map(({ id, ...p }) => ({ ...p, items: lines.filter((l) => l.paymentId === id).map(({ paymentId: _p, ...l }) => l) }));
-  return takenSoFar({ entries: mine, payments: accountPayments }, ctx).capCountedCents;
+  const itemsOf = new Map<string, AccountPayment["items"]>();
+  for (const { paymentId, ...line } of lines) itemsOf.set(paymentId, [...(itemsOf.get(paymentId) ?? []), line]);
+  const entriesBy = new Map<string, AccountEntry[]>();
+  for (const { entrantUserId: who, ...e } of sent) entriesBy.set(who, [...(entriesBy.get(who) ?? []), e]);
+  const paymentsBy = new Map<string, AccountPayment[]>();
+  for (const { id, entrantUserId: who, ...p } of paid) paymentsBy.set(who, [...(paymentsBy.get(who) ?? []), { ...p, items: itemsOf.get(id) ?? [] }]);
+  return { entries: entriesBy, payments: paymentsBy };
+}
+
+/**
+ * Entry fees the per-entrant cap counts already: paid by card or marked paid offline, for entries
+ * still in the show. The same rule as the entrants spreadsheet (exports/entrant-accounts.ts).
+ */
+async function entryFeesPaidCents(reader: Pick<Tx, "select">, userId: string, showId: string, ctx: { schedule: FeeSchedule; member: boolean }): Promise<number> {
+  const facts = await accountFactsOf(reader, showId, userId);
+  return takenSoFar({ entries: facts.entries.get(userId) ?? [], payments: facts.payments.get(userId) ?? [] }, ctx).capCountedCents;
 }
 
 const scheduleOf = (s: Awaited<ReturnType<typeof settingsForShowId>>): FeeSchedule => ({
