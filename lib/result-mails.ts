@@ -6,7 +6,7 @@
 import "server-only";
 import { and, eq, isNotNull } from "drizzle-orm";
 import { db } from "@/db/client";
-import { critiqueAvailability, critiqueData, entrantContacts, previousSnapshot } from "@/db/queries/published-results";
+import { critiqueAvailability, critiqueOf, entrantContacts, previousSnapshot } from "@/db/queries/published-results";
 import { settingsForShowId } from "@/db/queries/settings";
 import { entries, resultMails, resultPublications, shows } from "@/db/schema";
 import { critiqueBytes } from "@/exports/critique-pdf";
@@ -59,7 +59,7 @@ export async function sendResultMails(publicationId: string): Promise<ResultMail
           notes.push(`Entry ${e.entryNumber}: ${allowed.why}`);
           continue;
         }
-        const data = await critiqueData(e.entryId, { asEntrant: entrantId });
+        const data = await critiqueOf({ entryId: e.entryId, entryNumber: e.entryNumber, title: e.title, category: categoryOf.get(e.entryId) ?? "", showName: pub.showName });
         if (data.judges.length === 0) continue;
         attachments.push({ filename: `critique-${e.entryNumber}.pdf`, content: await critiqueBytes(data), contentType: "application/pdf" });
       }

@@ -135,6 +135,12 @@ export async function photoForViewer(viewer: Viewer, photoId: string, size: Phot
   if (!row) throw notFound("There is no such photo.");
   const allowed = row.entrantUserId === viewer.id || hasShowRole(viewer, row.showId, ["chair", "intake", "judge", "scribe"]);
   if (!allowed) throw forbiddenError("This photo belongs to another entrant.");
-  const key = size === "thumb" ? (row.thumbKey ?? row.storageKey) : size === "web" ? (row.webKey ?? row.storageKey) : row.storageKey;
-  return { key, contentType: row.contentType };
+  return { key: keyForSize(row, size), contentType: row.contentType };
+}
+
+/** The stored version of a photo for a size; the original where that version was never made. */
+export function keyForSize(row: { storageKey: string; webKey: string | null; thumbKey: string | null }, size: PhotoSize): string {
+  if (size === "thumb") return row.thumbKey ?? row.storageKey;
+  if (size === "web") return row.webKey ?? row.storageKey;
+  return row.storageKey;
 }

@@ -6,6 +6,7 @@ import "server-only";
 import { and, asc, eq, inArray, isNull } from "drizzle-orm";
 import { db } from "@/db/client";
 import { categories, entrantProfiles, entries, entryPhotos, judgeSheets, resultPublications, scoreSheets, shows, showSettings, user } from "@/db/schema";
+import { settingsForShowId } from "@/db/queries/settings";
 import { notFound } from "@/lib/errors";
 import type { Viewer } from "@/lib/session";
 import type { CritiqueData } from "@/exports/critique-pdf";
@@ -137,12 +138,14 @@ export async function myResults(viewer: Viewer, showIds: string[]): Promise<Map<
   for (const showId of [...new Set(showIds)]) {
     const publication = await currentPublication(db, showId);
     if (!publication) continue;
-    const [policy] = await db.select({ commentPolicy: showSettings.commentPolicy, critiqueFeeCents: showSettings.critiqueFeeCents }).from(showSettings).where(eq(showSettings.showId, showId));
     const mine = publication.snapshot.categories.flatMap((c) => c.entries).filter((e) => e.entrantUserId === viewer.id);
     if (mine.length === 0) continue;
-    const asked = await db.select({ id: entries.id, critiqueRequested: entries.critiqueRequested }).from(entries).where(inArray(entries.id, mine.map((e) => e.entryId)));
+    const [policy, asked] = await Promise.all([
+      settingsForShowId(showId),
+      db.select({ id: entries.id, critiqueRequested: entries.critiqueRequested }).from(entries).where(inArray(entries.id, mine.map((e) => e.entryId))),
+    ]);
     for (const e of mine) {
-      const critique = critiqueAvailability(policy ?? { commentPolicy: "all", critiqueFeeCents: 0 }, asked.find((a) => a.id === e.entryId) ?? { critiqueRequested: false }, e);
+      const critique = critiqueAvailability(policy, asked.find((a) => a.id === e.entryId) ?? { critiqueRequested: false }, e);
       out.set(e.entryId, { words: resultWords(e), ribbon: e.ribbon, awarded: isAwarded(e), critique: critique.available ? { available: true, url: `/api/entries/${e.entryId}/critique` } : critique });
     }
   }
@@ -150,33 +153,38 @@ export async function myResults(viewer: Viewer, showIds: string[]): Promise<Map<
 }
 
 /**
- * The critique of one entry for the PDF: its own judges' submitted sheets only ("Judge 1", "Judge 2"…,
- * never names), its marks and comments. Not found unless the entry is the viewer's (or `asEntrant`
- * for the mailer), results are published and the show's policy returns comments for it.
+ * The critique of one of the viewer's entries for the PDF. Not found unless the entry is theirs,
+ * results are published and the show's policy returns comments for it.
  */
-export async function critiqueData(entryId: string, who: { viewer: Viewer } | { asEntrant: string }): Promise<CritiqueData> {
+export async function critiqueData(entryId: string, viewer: Viewer): Promise<CritiqueData> {
   const [entry] = await db
     .select({ id: entries.id, showId: entries.showId, entrantUserId: entries.entrantUserId, entryNumber: entries.entryNumber, title: entries.title, critiqueRequested: entries.critiqueRequested, categoryCode: categories.code, categoryName: categories.name, showName: shows.name })
     .from(entries)
     .innerJoin(shows, eq(shows.id, entries.showId))
     .leftJoin(categories, eq(categories.id, entries.categoryId))
     .where(eq(entries.id, entryId));
-  const owner = "viewer" in who ? who.viewer.id : who.asEntrant;
   // The same answer for "not yours" and "not published": nothing tells another entrant it exists.
   const none = notFound("There is no critique for this entry (yet). Critiques are released with the results.");
-  if (!entry || entry.entrantUserId !== owner) throw none;
+  if (!entry || entry.entrantUserId !== viewer.id) throw none;
   const publication = await currentPublication(db, entry.showId);
   const result = publication?.snapshot.categories.flatMap((c) => c.entries).find((e) => e.entryId === entry.id);
   if (!publication || !result) throw none;
-  const [policy] = await db.select({ commentPolicy: showSettings.commentPolicy, critiqueFeeCents: showSettings.critiqueFeeCents }).from(showSettings).where(eq(showSettings.showId, entry.showId));
-  const allowed = critiqueAvailability(policy ?? { commentPolicy: "all", critiqueFeeCents: 0 }, entry, result);
+  const allowed = critiqueAvailability(await settingsForShowId(entry.showId), entry, result);
   if (!allowed.available) throw notFound(allowed.why);
+  const category = entry.categoryCode ? `${entry.categoryCode} ${entry.categoryName ?? ""}`.trim() : "";
+  return critiqueOf({ entryId: entry.id, entryNumber: entry.entryNumber ?? 0, title: entry.title, category, showName: entry.showName });
+}
 
+/**
+ * An entry's critique from its judges' submitted sheets only ("Judge 1", "Judge 2"…, never names):
+ * marks and comments. The caller has checked that this critique may go out (critiqueData, the mailer).
+ */
+export async function critiqueOf(e: { entryId: string; entryNumber: number; title: string; category: string; showName: string }): Promise<CritiqueData> {
   const sheets = await db
-    .select({ judgeId: judgeSheets.judgeUserId, state: judgeSheets.state, sheet: scoreSheets.sheet })
+    .select({ state: judgeSheets.state, sheet: scoreSheets.sheet })
     .from(judgeSheets)
     .leftJoin(scoreSheets, eq(scoreSheets.id, judgeSheets.scoreSheetId))
-    .where(and(eq(judgeSheets.entryId, entry.id), eq(judgeSheets.status, "submitted")))
+    .where(and(eq(judgeSheets.entryId, e.entryId), eq(judgeSheets.status, "submitted")))
     .orderBy(asc(judgeSheets.judgeUserId));
   const sheet: ScoreSheet = (sheets.find((s) => s.sheet)?.sheet as ScoreSheet | undefined) ?? { sections: [] };
   const text = (state: (typeof sheets)[number]["state"], key: string) => {
@@ -184,10 +192,10 @@ export async function critiqueData(entryId: string, who: { viewer: Viewer } | { 
     return typeof v === "string" ? v : "";
   };
   return {
-    showName: entry.showName,
-    entryNumber: entry.entryNumber ?? 0,
-    title: entry.title,
-    category: entry.categoryCode ? `${entry.categoryCode} ${entry.categoryName ?? ""}`.trim() : "",
+    showName: e.showName,
+    entryNumber: e.entryNumber,
+    title: e.title,
+    category: e.category,
     sheet,
     judges: sheets.map((s, i) => ({
       label: `Judge ${i + 1}`,

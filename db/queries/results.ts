@@ -8,6 +8,7 @@ import {
 } from "@/db/schema";
 import { writeAudit } from "@/db/queries/audit";
 import { JUDGED_OUT } from "@/db/queries/judging-setup";
+import { currentPublication } from "@/db/queries/published-results";
 import { lockShow } from "@/db/queries/settings";
 import { totalsInJs as totalsInJsWith, totalsInSql as totalsInSqlWith, type EntryTotals } from "@/db/totals";
 import { conflict } from "@/lib/errors";
@@ -128,7 +129,7 @@ export type ResultsReview = Awaited<ReturnType<typeof resultsReview>>;
 /** The chair's current publication (for sending its mails again); 409 when nothing is published. */
 export async function currentPublicationForChair(viewer: Viewer, slug: string) {
   const { showId } = await requireShowRole(viewer, slug, ["chair"]);
-  const [row] = await db.select({ id: resultPublications.id, version: resultPublications.version }).from(resultPublications).where(and(eq(resultPublications.showId, showId), isNull(resultPublications.unpublishedAt)));
+  const row = await currentPublication(db, showId);
   if (!row) throw conflict("The results are not published, so there are no mails to send.");
   return row;
 }

@@ -88,7 +88,7 @@ describe("nothing leaks before publishing", () => {
     expect((await myResults(w.wren, [w.show.id])).size).toBe(0);
     const mine = (await myEntriesByShow(w.wren)).find((g) => g.show.id === w.show.id)!;
     expect(mine.entries.map((e) => e.result)).toEqual([null, null]);
-    await expect(critiqueData(w.entries[0]!.id, { viewer: w.wren })).rejects.toMatchObject({ status: 404 });
+    await expect(critiqueData(w.entries[0]!.id, w.wren)).rejects.toMatchObject({ status: 404 });
     // The mailer refuses to send for a show that has not published.
     expect(await sendResultMails(crypto.randomUUID())).toEqual({ sent: 0, failed: 0, alreadySent: 0, unchanged: 0 });
   });
@@ -132,7 +132,7 @@ describe("after publishing", () => {
   it("gives each entrant their own critique: one page per judge, this entry's marks and comments, no names", async () => {
     const w = await judgedShow();
     await publishResults(w.chair, w.show.slug, { reason: "" });
-    const data = await critiqueData(w.entries[0]!.id, { viewer: w.wren });
+    const data = await critiqueData(w.entries[0]!.id, w.wren);
     expect(data.judges.map((j) => j.label)).toEqual(["Judge 1", "Judge 2"]);
     const pages = await pdfText(await critiqueBytes(data));
     expect(pages).toHaveLength(2);
@@ -145,8 +145,8 @@ describe("after publishing", () => {
     expect(all).toContain(`Total: ${sheetTotal(DEMO_SHEET.sheet, marksFor(1)).total}`);
     expect(all).not.toMatch(/Tide pool 2|Tide pool 3|Judge Ash|Judge Birch|Sol Marten/);
     // Another entrant's entry is "not found", and so is one's own once the policy withholds it.
-    await expect(critiqueData(w.entries[1]!.id, { viewer: w.wren })).rejects.toMatchObject({ status: 404 });
-    await expect(critiqueData(w.entries[0]!.id, { viewer: w.sol })).rejects.toMatchObject({ status: 404 });
+    await expect(critiqueData(w.entries[1]!.id, w.wren)).rejects.toMatchObject({ status: 404 });
+    await expect(critiqueData(w.entries[0]!.id, w.sol)).rejects.toMatchObject({ status: 404 });
     const mine = await myResults(w.wren, [w.show.id]);
     expect(mine.get(w.entries[0]!.id)).toMatchObject({ words: "1st place (Blue)", critique: { available: true, url: `/api/entries/${w.entries[0]!.id}/critique` } });
   });
@@ -156,13 +156,13 @@ describe("after publishing", () => {
     await overridePlacement(w.chair, w.show.slug, { entryId: w.entries[2]!.id, place: null, honorableMention: false, reason: "Withheld by the judges." });
     await publishResults(w.chair, w.show.slug, { reason: "" });
     await db.update(showSettings).set({ commentPolicy: "placed" }).where(eq(showSettings.showId, w.show.id));
-    await expect(critiqueData(w.entries[0]!.id, { viewer: w.wren })).resolves.toBeTruthy();
-    await expect(critiqueData(w.entries[2]!.id, { viewer: w.wren })).rejects.toMatchObject({ status: 404, message: expect.stringMatching(/ribbon winners only/) });
+    await expect(critiqueData(w.entries[0]!.id, w.wren)).resolves.toBeTruthy();
+    await expect(critiqueData(w.entries[2]!.id, w.wren)).rejects.toMatchObject({ status: 404, message: expect.stringMatching(/ribbon winners only/) });
     await db.update(showSettings).set({ commentPolicy: "all", critiqueFeeCents: 500 }).where(eq(showSettings.showId, w.show.id));
     const mine = await myResults(w.wren, [w.show.id]);
     expect(mine.get(w.entries[0]!.id)?.critique).toEqual({ available: false, why: expect.stringMatching(/did not ask for one/) });
     await db.update(showSettings).set({ commentPolicy: "none", critiqueFeeCents: 0 }).where(eq(showSettings.showId, w.show.id));
-    await expect(critiqueData(w.entries[0]!.id, { viewer: w.wren })).rejects.toMatchObject({ status: 404, message: expect.stringMatching(/does not return/) });
+    await expect(critiqueData(w.entries[0]!.id, w.wren)).rejects.toMatchObject({ status: 404, message: expect.stringMatching(/does not return/) });
   });
 });
 
@@ -191,7 +191,7 @@ describe("the results mails", () => {
 
     await unpublishResults(w.chair, w.show.slug, { reason: "A ribbon went to the wrong entry." });
     expect((await publicResults(w.show.slug))!.published).toBeNull();
-    await expect(critiqueData(w.entries[0]!.id, { viewer: w.wren })).rejects.toMatchObject({ status: 404 });
+    await expect(critiqueData(w.entries[0]!.id, w.wren)).rejects.toMatchObject({ status: 404 });
     expect((await myResults(w.wren, [w.show.id])).size).toBe(0);
     expect(await sendResultMails(first.id)).toEqual({ sent: 0, failed: 0, alreadySent: 0, unchanged: 0 });
 

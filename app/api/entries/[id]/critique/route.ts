@@ -8,7 +8,7 @@ import { isUuid } from "@/lib/ids";
 
 export const GET = defineRoute<{ id: string }>({ access: "user" }, async ({ viewer, params }) => {
   if (!isUuid(params.id)) throw notFound("There is no such entry.");
-  const data = await critiqueData(params.id, { viewer: viewer! });
+  const data = await critiqueData(params.id, viewer!);
   const body = await critiqueBytes(data);
   return new Response(new Uint8Array(body), {
     headers: {
