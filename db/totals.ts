@@ -58,11 +58,12 @@ export async function totalsInJs(db: TotalsDb, showId: string): Promise<EntryTot
     if (r.total === null || !r.categoryId) continue;
     byCategory.set(r.categoryId, [...(byCategory.get(r.categoryId) ?? []), { entryId: r.entryId, judgeId: r.judgeId, total: r.total }]);
   }
-  const out: EntryTotals[] = [];
-  for (const [categoryId, totals] of byCategory) {
-    const z = new Map(severityAdjusted(totals).entries.map((e) => [e.entryId, e.z]));
-    for (const s of summariseEntries(totals)) out.push({ entryId: s.entryId, categoryId, count: s.count, mean: s.mean, median: s.median, spread: s.spread, sampleSd: s.sampleSd, z: z.get(s.entryId) ?? null });
-  }
-  return out;
+  return [...byCategory].flatMap(([categoryId, totals]) => categoryTotals(categoryId, totals));
+}
+
+/** One category's entry totals from its judges' sheet totals (the same figures as the SQL). */
+export function categoryTotals(categoryId: string, totals: readonly JudgeTotal[]): EntryTotals[] {
+  const z = new Map(severityAdjusted(totals).entries.map((e) => [e.entryId, e.z]));
+  return summariseEntries(totals).map((s) => ({ entryId: s.entryId, categoryId, count: s.count, mean: s.mean, median: s.median, spread: s.spread, sampleSd: s.sampleSd, z: z.get(s.entryId) ?? null }));
 }
 
