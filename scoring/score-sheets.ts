@@ -8,6 +8,7 @@
 // in 2^53). So 0.7 × 10 is 7, full marks total exactly the sheet's nominal maximum however it is
 // weighted or ordered, and the order of criteria never changes a total. Round only for display,
 // with formatScore.
+import { plural } from "./words";
 
 /** Points from 0 to the criterion's most points, in steps (default 1). */
 export type PointsScale = { kind: "points"; step?: number };
@@ -157,7 +158,6 @@ export function formatScore(x: number | null | undefined, decimals = 2): string 
 
 const num = (x: number) => formatScore(x, 6);
 const fold = (label: string) => label.normalize("NFC").trim().toLowerCase();
-const plural = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;
 
 // ---------------------------------------------------------------------------------------------
 // Checking a sheet

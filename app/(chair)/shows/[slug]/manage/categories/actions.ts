@@ -9,11 +9,10 @@ import { admitFromWaitlist, overrideEntryCategory, reviewSizeFlag, updateSizeTol
 import { defineAction } from "@/lib/action";
 import { admitSchema, categorySetSchema, overrideSchema, reviewSizeSchema, toleranceSchema } from "@/lib/schemas/categories";
 import { formatInches } from "@/scoring/units";
+import { plural } from "@/scoring/words";
 
 const showSlug = z.string().min(1, "The show is missing.");
 const withSlug = <S extends z.ZodType>(schema: S) => z.intersection(schema, z.object({ showSlug }));
-
-const plural = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;
 
 function refresh(slug: string) {
   revalidatePath(`/shows/${slug}/manage/categories`);

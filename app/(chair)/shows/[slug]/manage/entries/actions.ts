@@ -6,8 +6,7 @@ import { acceptEntries, declineEntries, markEntriesPaidOffline, releaseDecisions
 import { defineAction } from "@/lib/action";
 import { sendDecisionMail } from "@/lib/entry-mails";
 import { acceptEntriesSchema, declineEntriesSchema, markPaidOfflineSchema, releaseDecisionsSchema } from "@/lib/schemas/chair-entries";
-
-const plural = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;
+import { plural } from "@/scoring/words";
 
 function revalidate(slug: string) {
   revalidatePath(`/shows/${slug}/manage/entries`);

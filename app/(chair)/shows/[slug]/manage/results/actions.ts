@@ -10,6 +10,7 @@ import { sendResultMails, type ResultMailReport } from "@/lib/result-mails";
 import {
   awardSchema, clearPlacementSchema, deleteAwardSchema, pickSchema, placementSchema, publishSchema, removePickSchema, resultRulesSchema, tieOrderSchema, unpublishSchema,
 } from "@/lib/schemas/results";
+import { plural } from "@/scoring/words";
 
 const showSlug = z.string().min(1, "The show is missing.");
 const withSlug = <S extends z.ZodType>(schema: S) => z.intersection(schema, z.object({ showSlug }));
@@ -67,8 +68,6 @@ export const removePickAction = defineAction(withSlug(removePickSchema), async (
   refresh(slug);
   return { message: "Removed." };
 });
-
-const plural = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;
 
 /** The mails go after the commit: a failed mail never undoes publishing, and "Send again" retries. */
 async function mailResults(publicationId: string, done: string): Promise<{ message: string }> {
