@@ -94,6 +94,36 @@ export const judgeDeclarations = pgTable(
   (t) => [index("judge_declarations_show_judge").on(t.showId, t.judgeUserId)],
 );
 
+/**
+ * A judge who may not judge an entry (their own, or a declared person's), found when something
+ * changed (a declaration, a submission, a category move), with the chair's decision once made:
+ * "allowed" (with a reason) or "moved" (the judge was taken off the panel). Only the chair sees
+ * these; the judge is never told whether a declaration matched.
+ */
+export const judgeConflictRecords = pgTable(
+  "judge_conflicts",
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    showId: uuid()
+      .notNull()
+      .references(() => shows.id, { onDelete: "cascade" }),
+    judgeUserId: text()
+      .notNull()
+      .references(() => user.id, { onDelete: "cascade" }),
+    entryId: uuid()
+      .notNull()
+      .references(() => entries.id, { onDelete: "cascade" }),
+    reason: text().notNull(),
+    foundWhen: text().notNull(),
+    foundAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+    decision: text(),
+    decisionReason: text().notNull().default(""),
+    decidedBy: text().references(() => user.id, { onDelete: "set null" }),
+    decidedAt: timestamp({ withTimezone: true }),
+  },
+  (t) => [uniqueIndex("judge_conflicts_judge_entry").on(t.judgeUserId, t.entryId), index("judge_conflicts_show").on(t.showId)],
+);
+
 export const sheetStatus = pgEnum("sheet_status", ["open", "submitted"]);
 
 /** One judge's sheet for one entry: the merged state of every change (scoring/sheet-sync.ts). */
