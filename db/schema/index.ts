@@ -1,5 +1,6 @@
 // Every table of the app, for the Drizzle client and drizzle-kit.
 export * from "./auth";
+export * from "./sign-in-failures";
 export * from "./shows";
 export * from "./settings";
 export * from "./people";
