@@ -10,6 +10,12 @@ const schema = z.object({
   DATABASE_URL: z.string().min(1).default("postgres://postgres@127.0.0.1:54329/ribbonry"),
   BETTER_AUTH_SECRET: z.string().min(32).default("dev-only-secret-change-me-0123456789abcdef"),
   AUTH_SIGN_IN_LIMIT_PER_MINUTE: z.coerce.number().int().min(1).default(5),
+  // Consecutive failed sign-ins for one e-mail address before it is locked for AUTH_ACCOUNT_LOCK_MINUTES.
+  AUTH_ACCOUNT_FAILURE_LIMIT: z.coerce.number().int().min(1).default(10),
+  AUTH_ACCOUNT_LOCK_MINUTES: z.coerce.number().int().min(1).default(15),
+  // How many reverse proxies in front of the app append to X-Forwarded-For; 0 = none, trust no
+  // forwarded header (see lib/client-address.ts).
+  TRUSTED_PROXY_HOPS: z.coerce.number().int().min(0).max(10).default(0),
   S3_ENDPOINT: z.url().default("http://127.0.0.1:4569"),
   S3_REGION: z.string().default("us-east-1"),
   S3_BUCKET: z.string().min(3).max(63).default("ribbonry-photos"),
