@@ -80,7 +80,7 @@ export async function startServices(opts: ServicesOptions): Promise<Services> {
       port: ports.s3,
       directory: s3Dir,
       silent: true,
-      configureBuckets: [{ name: env.S3_BUCKET ?? "ribbonry-photos", configs: [corsXml(ports.app)] }],
+      configureBuckets: [{ name: env.S3_BUCKET ?? "ribbonry-photos", configs: [corsXml()] }],
     });
     await wrapListen(s3.run(), ports.s3, "S3 fake (s3rver)");
     stops.push(() => s3.close());
@@ -137,12 +137,11 @@ function fromProcessEnv(): Record<string, string> {
   return Object.fromEntries(keys.flatMap((k) => (process.env[k] ? [[k, process.env[k]!]] : [])));
 }
 
-// Browsers upload photos straight to S3 with presigned PUTs, which needs CORS on the bucket.
-function corsXml(appPort: number): string {
-  const origins = [`http://localhost:${appPort}`, `http://127.0.0.1:${appPort}`]
-    .map((o) => `<AllowedOrigin>${o}</AllowedOrigin>`)
-    .join("");
-  return `<CORSConfiguration><CORSRule>${origins}<AllowedMethod>GET</AllowedMethod><AllowedMethod>PUT</AllowedMethod><AllowedMethod>HEAD</AllowedMethod><AllowedHeader>*</AllowedHeader><ExposeHeader>ETag</ExposeHeader><MaxAgeSeconds>600</MaxAgeSeconds></CORSRule></CORSConfiguration>`;
+// Browsers upload photos straight to S3 with presigned form POSTs, which needs CORS on the bucket.
+// Any loopback port, so a `scripts/dev-app.ts <port>` server on the test fakes can upload too.
+function corsXml(): string {
+  const origins = ["http://localhost:*", "http://127.0.0.1:*"].map((o) => `<AllowedOrigin>${o}</AllowedOrigin>`).join("");
+  return `<CORSConfiguration><CORSRule>${origins}<AllowedMethod>GET</AllowedMethod><AllowedMethod>PUT</AllowedMethod><AllowedMethod>POST</AllowedMethod><AllowedMethod>HEAD</AllowedMethod><AllowedHeader>*</AllowedHeader><ExposeHeader>ETag</ExposeHeader><MaxAgeSeconds>600</MaxAgeSeconds></CORSRule></CORSConfiguration>`;
 }
 
 // maildev's API server announces itself with console.info even when `silent` is set.

@@ -63,9 +63,7 @@ const HEIF_FAMILY = new Set(["image/heic", "image/heif", "image/heic-sequence", 
 
 export async function processPhoto(input: Buffer, rules: PhotoRules): Promise<ProcessedPhoto> {
   // Before anything reads the content: an oversize upload costs no decoding.
-  if (input.length > rules.maxBytes) {
-    throw new PhotoRejected("too_large", `The photo is ${sizeOver(input.length, rules.maxBytes)}; this show accepts up to ${formatMb(rules.maxBytes)}.`);
-  }
+  if (input.length > rules.maxBytes) throw tooLarge(input.length, rules.maxBytes);
   const sourceType = await detectType(input);
   const { widthPx, heightPx } = await orientedSize(input, sourceType);
   checkMinimum(widthPx, heightPx, rules);
@@ -77,6 +75,11 @@ export async function processPhoto(input: Buffer, rules: PhotoRules): Promise<Pr
   const web = await encode(input, sourceType, { quality: WEB_QUALITY }, WEB_LONG_SIDE_PX);
   const thumb = await encode(input, sourceType, { quality: THUMB_QUALITY }, THUMB_LONG_SIDE_PX);
   return { original, web, thumb, sourceType };
+}
+
+/** The refusal for a file over the show's size limit; also used when storage reports the size first. */
+export function tooLarge(bytes: number, maxBytes: number): PhotoRejected {
+  return new PhotoRejected("too_large", `The photo is ${sizeOver(bytes, maxBytes)}; this show accepts up to ${formatMb(maxBytes)}.`);
 }
 
 /** The real type from the bytes (magic numbers), whatever the file was called. */

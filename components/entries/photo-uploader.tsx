@@ -23,15 +23,25 @@ async function messageOf(res: Response): Promise<string> {
   return body?.message ?? "The photo could not be saved. Please try again.";
 }
 
-function put(url: string, file: File, contentType: string, onProgress: (percent: number) => void): Promise<void> {
+class StorageRefused extends Error {}
+
+/**
+ * An S3 form POST: the signed fields first and the file last, because S3 ignores every field
+ * after the file (AWS S3 API reference, POST Object). XMLHttpRequest rather than fetch for the
+ * upload progress; either way the browser sends it to the storage origin (CSP connect-src).
+ */
+function post(url: string, fields: Record<string, string>, file: File, onProgress: (percent: number) => void): Promise<void> {
+  const form = new FormData();
+  for (const [name, value] of Object.entries(fields)) form.append(name, value);
+  form.append("file", file);
   return new Promise((resolve, reject) => {
     const xhr = new XMLHttpRequest();
-    xhr.open("PUT", url);
-    xhr.setRequestHeader("Content-Type", contentType);
+    xhr.open("POST", url);
     xhr.upload.onprogress = (e) => e.lengthComputable && onProgress(Math.round((e.loaded / e.total) * 100));
-    xhr.onload = () => (xhr.status >= 200 && xhr.status < 300 ? resolve() : reject(new Error(`upload answered ${xhr.status}`)));
+    // 400/403 here is the signed policy refusing the file (too large, or another type).
+    xhr.onload = () => (xhr.status >= 200 && xhr.status < 300 ? resolve() : reject(new StorageRefused(`upload answered ${xhr.status}`)));
     xhr.onerror = () => reject(new Error("network error"));
-    xhr.send(file);
+    xhr.send(form);
   });
 }
 
@@ -50,8 +60,8 @@ export function PhotoUploader({ entryId, view, label, hint, saved: initial, disa
     try {
       const presign = await fetch(`/api/entries/${entryId}/photos`, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify({ view, contentType, bytes: file.size }) });
       if (!presign.ok) return setPhase({ kind: "error", message: await messageOf(presign) });
-      const { uploadUrl, uploadKey } = (await presign.json()) as { uploadUrl: string; uploadKey: string };
-      await put(uploadUrl, file, contentType, (percent) => setPhase({ kind: "uploading", percent }));
+      const { uploadUrl, uploadFields, uploadKey } = (await presign.json()) as { uploadUrl: string; uploadFields: Record<string, string>; uploadKey: string };
+      await post(uploadUrl, uploadFields, file, (percent) => setPhase({ kind: "uploading", percent }));
       setPhase({ kind: "checking" });
       const attach = await fetch(`/api/entries/${entryId}/photos/${view}`, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify({ uploadKey }) });
       if (!attach.ok) return setPhase({ kind: "error", message: await messageOf(attach) });
@@ -59,6 +69,9 @@ export function PhotoUploader({ entryId, view, label, hint, saved: initial, disa
       setPhase({ kind: "done" });
     } catch (err) {
       console.error("[photo-uploader] upload failed", err);
+      if (err instanceof StorageRefused) {
+        return setPhase({ kind: "error", message: `The photo store refused this file. Photos must be a JPEG, PNG, WebP or HEIC of at most ${Number((maxBytes / 1e6).toFixed(1))} MB.` });
+      }
       setPhase({ kind: "error", message: "The upload didn't finish. Check your connection and try again; your saved photo is unchanged." });
     } finally {
       if (inputRef.current) inputRef.current.value = "";

@@ -12,9 +12,9 @@ import { badInput, forbiddenError, notFound } from "@/lib/errors";
 import { isUuid } from "@/lib/ids";
 import type { EntryPhotoView, PhotoSize, PhotoView } from "@/lib/schemas/entry";
 import { hasShowRole, type Viewer } from "@/lib/session";
-import { PhotoRejected, processPhoto } from "@/storage/photo-processing";
+import { PhotoRejected, processPhoto, tooLarge } from "@/storage/photo-processing";
 import { deletePhotoVersions, storePhotoVersions } from "@/storage/photo-store";
-import { deleteObject, getObjectBytes, isMissing, presignPut } from "@/storage/s3";
+import { deleteObject, getObjectBytesUpTo, isMissing, ObjectTooLarge, objectSize, presignPost } from "@/storage/s3";
 
 const UPLOAD_URL_SECONDS = 10 * 60;
 const uploadPrefix = (entryId: string, view: string) => `uploads/entries/${entryId}/${view}/`;
@@ -23,18 +23,19 @@ function allowedViews(settings: EffectiveSettings): string[] {
   return [...new Set([...settings.requiredPhotoViews, "other"])];
 }
 
-/** A presigned PUT for the raw upload, to a private key only this entry's attach step accepts. */
+/**
+ * A presigned form POST for the raw upload, to a private key only this entry's attach step
+ * accepts; its policy binds the type and the show's size limit, so the store refuses a larger file.
+ */
 export async function presignEntryPhoto(viewer: Viewer, entryId: string, view: PhotoView, contentType: string, bytes: number) {
   const a = await entryAccess(viewer, entryId);
   assertEditable(a);
   const settings = await settingsForShowId(a.show.id);
   if (!allowedViews(settings).includes(view)) throw badInput("This show doesn't ask for that view.", { view: ["Choose one of the views the show asks for."] });
-  if (bytes > settings.photoMaxBytes) {
-    const mb = (n: number) => `${Number((n / 1_000_000).toFixed(1))} MB`;
-    throw badInput(`The photo is ${mb(bytes)}; this show accepts up to ${mb(settings.photoMaxBytes)}.`, { bytes: ["The file is too large."] });
-  }
+  if (bytes > settings.photoMaxBytes) throw badInput(tooLarge(bytes, settings.photoMaxBytes).message, { bytes: ["The file is too large."] });
   const uploadKey = `${uploadPrefix(entryId, view)}${randomUUID()}`;
-  return { uploadUrl: await presignPut(uploadKey, contentType, UPLOAD_URL_SECONDS), uploadKey, maxBytes: settings.photoMaxBytes };
+  const { url, fields } = await presignPost(uploadKey, contentType, settings.photoMaxBytes, UPLOAD_URL_SECONDS);
+  return { uploadUrl: url, uploadFields: fields, uploadKey, maxBytes: settings.photoMaxBytes };
 }
 
 export type AttachedPhoto = EntryPhotoView & { thumbUrl: string; webUrl: string };
@@ -50,13 +51,7 @@ export async function attachEntryPhoto(viewer: Viewer, entryId: string, view: Ph
     throw badInput("That upload doesn't belong to this photo; please choose the file again.", { uploadKey: ["Unknown upload."] });
   }
   const settings = await settingsForShowId(a.show.id);
-  let raw: Buffer;
-  try {
-    raw = await getObjectBytes(uploadKey);
-  } catch (err) {
-    if (isMissing(err)) throw badInput("We didn't receive the file; please choose it again.", { photo: ["The upload did not arrive."] });
-    throw err;
-  }
+  const raw = await readUpload(uploadKey, settings.photoMaxBytes);
   let processed;
   try {
     processed = await processPhoto(raw, { maxBytes: settings.photoMaxBytes, minWidthPx: settings.photoMinWidthPx, minHeightPx: settings.photoMinHeightPx });
@@ -119,6 +114,27 @@ export async function attachEntryPhoto(viewer: Viewer, entryId: string, view: Ph
 }
 
 export const photoUrls = (photoId: string) => ({ thumbUrl: `/api/photos/${photoId}/thumb`, webUrl: `/api/photos/${photoId}/web` });
+
+/**
+ * The raw upload, read only when its stored size is within the show's limit: the size from the
+ * object's headers first (any store, whether or not it enforced the upload policy), then a read
+ * that stops at the limit. A refused upload is removed.
+ */
+async function readUpload(uploadKey: string, maxBytes: number): Promise<Buffer> {
+  let bytesOver: number;
+  try {
+    const stored = await objectSize(uploadKey);
+    if (stored <= maxBytes) return await getObjectBytesUpTo(uploadKey, maxBytes);
+    bytesOver = stored;
+  } catch (err) {
+    if (isMissing(err)) throw badInput("We didn't receive the file; please choose it again.", { photo: ["The upload did not arrive."] });
+    if (!(err instanceof ObjectTooLarge)) throw err;
+    bytesOver = err.bytesSeen;
+  }
+  await removeUpload(uploadKey);
+  const refused = tooLarge(bytesOver, maxBytes);
+  throw badInput(refused.message, { photo: [refused.message] });
+}
 
 async function removeUpload(key: string): Promise<void> {
   await deleteObject(key).catch((err: unknown) => console.error("[entries] could not remove raw upload", { key, err }));

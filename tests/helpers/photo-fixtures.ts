@@ -1,6 +1,7 @@
 // Test images made with sharp while the tests run, so no binary fixture is committed: a phone-style
 // JPEG (rotated by an EXIF tag, carrying GPS and camera tags), a PDF, a large noisy JPEG, a PNG.
 import { randomBytes } from "node:crypto";
+import { crc32, deflateSync } from "node:zlib";
 import sharp from "sharp";
 
 export type ExifOrientation = 1 | 2 | 3 | 4 | 5 | 6 | 7 | 8;
@@ -92,4 +93,28 @@ export function pngOf(widthPx: number, heightPx: number): Promise<Buffer> {
   return sharp({ create: { width: widthPx, height: heightPx, channels: 3, background: { r: 40, g: 90, b: 160 } } })
     .png()
     .toBuffer();
+}
+
+/**
+ * A PNG of one colour that is small on disk but huge once decoded: 1-bit greyscale, every row
+ * zero, so 20000 × 20000 is ~50 KB of deflate. Written chunk by chunk (PNG spec, ISO/IEC 15948:
+ * signature, IHDR, IDAT, IEND, each with a CRC-32) because making it with sharp would allocate it.
+ */
+export function hugeBlankPng(widthPx: number, heightPx: number): Buffer {
+  const rowBytes = 1 + Math.ceil(widthPx / 8); // filter byte 0 (None) + packed 1-bit samples
+  const ihdr = Buffer.alloc(13);
+  ihdr.writeUInt32BE(widthPx, 0);
+  ihdr.writeUInt32BE(heightPx, 4);
+  ihdr.set([1, 0, 0, 0, 0], 8); // bit depth 1, colour type 0 (greyscale), deflate, adaptive filter, no interlace
+  const idat = deflateSync(Buffer.alloc(rowBytes * heightPx), { level: 9 });
+  return Buffer.concat([Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]), pngChunk("IHDR", ihdr), pngChunk("IDAT", idat), pngChunk("IEND", Buffer.alloc(0))]);
+}
+
+function pngChunk(type: string, data: Buffer): Buffer {
+  const head = Buffer.alloc(8);
+  head.writeUInt32BE(data.length, 0);
+  head.write(type, 4, "latin1");
+  const crc = Buffer.alloc(4);
+  crc.writeUInt32BE(crc32(Buffer.concat([head.subarray(4), data])), 0);
+  return Buffer.concat([head, data, crc]);
 }

@@ -1,17 +1,19 @@
-// Entry photos against the local S3 fake: a presigned upload, the server's check (upright, no
-// GPS), refused files that leave the saved photo untouched, and who may see a photo.
+// Entry photos against the local S3 fake: a presigned form upload bound to the show's size, the
+// server's check (size before reading, pixels before decoding, upright, no GPS), refused files
+// that leave the saved photo untouched, and who may see a photo.
 import { and, eq } from "drizzle-orm";
 import exifr from "exifr";
 import sharp from "sharp";
-import { beforeAll, describe, expect, it } from "vitest";
+import { GetObjectCommand } from "@aws-sdk/client-s3";
+import { afterEach, beforeAll, describe, expect, it, vi } from "vitest";
 import { db } from "@/db/client";
 import { entryPhotos } from "@/db/schema";
 import { createDraft } from "@/db/queries/entries";
 import { POST as presignRoute } from "@/app/api/entries/[id]/photos/route";
 import { POST as attachRoute } from "@/app/api/entries/[id]/photos/[view]/route";
 import { GET as photoRoute } from "@/app/api/photos/[photoId]/[size]/route";
-import { ensureBucket, getObjectBytes, isMissing } from "@/storage/s3";
-import { bigJpeg, MARKER_RGB, pdfBytes, phoneStyleJpeg } from "../../helpers/photo-fixtures";
+import { ensureBucket, getObjectBytes, isMissing, s3 } from "@/storage/s3";
+import { bigJpeg, hugeBlankPng, MARKER_RGB, pdfBytes, phoneStyleJpeg } from "../../helpers/photo-fixtures";
 import { grantRole, makeShow, makeUser, type TestUser } from "../../helpers/factories";
 import { setSettings, viewerOf } from "./helpers";
 
@@ -29,14 +31,19 @@ let bea: TestUser;
 let chair: TestUser;
 let entryId: string;
 
-/** The browser's three calls: presign, PUT straight to storage, then ask the server to check it. */
+/** The browser's three calls: presign, a form POST straight to storage, then ask the server to check it. */
 async function upload(u: TestUser, view: string, bytes: Buffer, contentType = "image/jpeg", declaredBytes = bytes.length) {
   const presign = await call(presignRoute as Route, "POST", { id: entryId }, u.cookie, { view, contentType, bytes: declaredBytes });
   expect(presign.status, await presign.clone().text()).toBe(201);
-  const { uploadUrl, uploadKey } = (await presign.json()) as { uploadUrl: string; uploadKey: string };
+  const { uploadUrl, uploadFields, uploadKey } = (await presign.json()) as { uploadUrl: string; uploadFields: Record<string, string>; uploadKey: string };
   expect(uploadKey).toMatch(new RegExp(`^uploads/entries/${entryId}/${view}/`));
-  const put = await fetch(uploadUrl, { method: "PUT", headers: { "content-type": contentType }, body: new Uint8Array(bytes) });
-  expect(put.status).toBe(200);
+  const form = new FormData();
+  for (const [name, value] of Object.entries(uploadFields)) form.append(name, value);
+  form.append("file", new Blob([new Uint8Array(bytes)], { type: contentType }), "photo");
+  const post = await fetch(uploadUrl, { method: "POST", body: form });
+  // s3rver stores whatever arrives (it does not enforce the policy); real S3 answers 400 for a
+  // file outside content-length-range, and the server's own check below covers both.
+  expect(post.status).toBe(204);
   const attach = await call(attachRoute as Route, "POST", { id: entryId, view }, u.cookie, { uploadKey });
   return { attach, uploadKey, body: (await attach.clone().json()) as Record<string, unknown> };
 }
@@ -49,6 +56,10 @@ async function photoRow(view: "full" | "detail") {
 async function gone(key: string): Promise<boolean> {
   return getObjectBytes(key).then(() => false, (err: unknown) => isMissing(err));
 }
+
+afterEach(() => {
+  vi.restoreAllMocks();
+});
 
 beforeAll(async () => {
   await ensureBucket();
@@ -109,6 +120,40 @@ describe("entry photos", () => {
     const after = (await photoRow("full"))!;
     expect(after).toEqual(before);
     expect(Buffer.compare(await getObjectBytes(after.storageKey), savedBytes)).toBe(0);
+  });
+
+  it("binds the upload to the show's size limit and refuses a larger stored file without reading it", async () => {
+    const before = (await photoRow("full"))!;
+    const presign = await call(presignRoute as Route, "POST", { id: entryId }, ada.cookie, { view: "full", contentType: "image/jpeg", bytes: 1000 });
+    const { uploadFields } = (await presign.json()) as { uploadFields: Record<string, string> };
+    // The signed policy: S3 itself refuses a file over the limit (AWS S3 API reference, "Creating a POST policy").
+    const policy = JSON.parse(Buffer.from(uploadFields.Policy!, "base64").toString("utf8")) as { conditions: unknown[] };
+    expect(policy.conditions).toContainEqual(["content-length-range", 1, 400_000]);
+    expect(policy.conditions).toContainEqual({ "Content-Type": "image/jpeg" });
+
+    // A store that ignores the policy (as s3rver does) keeps a 1.2 MB file: the stored size is
+    // checked from the object's headers and the body is never fetched.
+    const send = vi.spyOn(s3, "send");
+    const { attach, body, uploadKey } = await upload(ada, "full", await bigJpeg(1_200_000), "image/jpeg", 1000);
+    expect(attach.status).toBe(400);
+    expect(body.message).toMatch(/^The photo is 1\.\d+ MB; this show accepts up to 0\.4 MB\.$/);
+    expect(body.fieldErrors).toEqual({ photo: [body.message] });
+    const reads = send.mock.calls.filter(([cmd]) => cmd instanceof GetObjectCommand && cmd.input.Key === uploadKey);
+    expect(reads).toHaveLength(0);
+    expect(await gone(uploadKey)).toBe(true);
+    expect(await photoRow("full")).toEqual(before);
+  });
+
+  it("refuses a small file that declares 20000 × 20000 pixels from its header, before decoding it", async () => {
+    const before = (await photoRow("full"))!;
+    const png = hugeBlankPng(20_000, 20_000);
+    expect(png.length).toBeLessThan(400_000);
+    const { attach, body, uploadKey } = await upload(ada, "full", png, "image/png");
+    expect(attach.status).toBe(400);
+    // The header check's own message; a decode stopped by sharp's limit would read "couldn't read".
+    expect(body.message).toBe("The photo is 20000 × 20000 pixels (400 megapixels); the largest we can process is 100 megapixels. Please upload a smaller copy.");
+    expect(await gone(uploadKey)).toBe(true);
+    expect(await photoRow("full")).toEqual(before);
   });
 
   it("replacing a photo swaps the row and removes the old versions", async () => {
