@@ -204,11 +204,17 @@ type Decision = { status: "accepted" | "declined"; reason: string };
 /** Statuses a decision may be taken (or changed) from: after intake the quilt is in the show. */
 const DECIDABLE: EntryStatus[] = ["submitted", "paid", "accepted", "declined"];
 
+/**
+ * Records a decision on the chosen entries. An entry that already has this decision (same status
+ * and reason) is left alone: no write, no audit row, and the caller mails only `entryIds`, the
+ * entries that changed. The rows are locked `for update` first, so parallel requests queue and
+ * each sees the status the one before it committed: twenty clicks on "Accept" change (and mail) once.
+ */
 async function decide(viewer: Viewer, showSlug: string, entryIds: string[], d: Decision) {
   const show = await requireShowRole(viewer, showSlug, CHAIR);
   const { juried } = await showFacts(show.showId);
   const ids = [...new Set(entryIds)];
-  const changed = await db.transaction(async (tx) => {
+  const { changed, unchanged } = await db.transaction(async (tx) => {
     const rows = await tx
       .select({ id: entries.id, entryNumber: entries.entryNumber, status: entries.status, decisionReason: entries.decisionReason })
       .from(entries)
@@ -222,13 +228,15 @@ async function decide(viewer: Viewer, showSlug: string, entryIds: string[], d: D
         `${stuck.map((r) => `No. ${r.entryNumber}`).join(", ")} ${stuck.length === 1 ? "is" : "are"} past the decision (${stuck[0]!.status}); nothing was changed.`,
       );
     }
+    const toChange = rows.filter((r) => r.status !== d.status || r.decisionReason !== d.reason);
+    if (toChange.length === 0) return { changed: [] as string[], unchanged: rows.length };
     const now = new Date();
     await tx
       .update(entries)
       // Juried shows keep decisions to themselves until the chair releases them.
       .set({ status: d.status, decisionReason: d.reason, decisionReleasedAt: juried ? null : now, updatedAt: now })
-      .where(inArray(entries.id, ids));
-    for (const r of rows) {
+      .where(inArray(entries.id, toChange.map((r) => r.id)));
+    for (const r of toChange) {
       await writeAudit(tx, {
         actorUserId: viewer.id,
         showId: show.showId,
@@ -239,9 +247,9 @@ async function decide(viewer: Viewer, showSlug: string, entryIds: string[], d: D
         after: { status: d.status, decisionReason: d.reason },
       });
     }
-    return rows.map((r) => r.id);
+    return { changed: toChange.map((r) => r.id), unchanged: rows.length - toChange.length };
   });
-  return { show, juried, entryIds: changed };
+  return { show, juried, entryIds: changed, unchanged };
 }
 
 export const acceptEntries = (viewer: Viewer, showSlug: string, entryIds: string[]) =>

@@ -172,6 +172,40 @@ describe("bulk actions at a show that is not juried", () => {
   });
 });
 
+describe("a decision that changes nothing", () => {
+  it("20 accepts of one entry at once: one change, one audit row, exactly one mail", async () => {
+    const show = await showWithChair(false);
+    const ivy = await entrant("Ivy Invented");
+    const e = await makeEntry(show.id, ivy.id, { status: "paid", title: "Twenty Clicks" });
+    actAs(chair.cookie);
+    const results = (await Promise.all(Array.from({ length: 20 }, () => acceptEntriesAction({ showSlug: show.slug, entryIds: [e.id] })))) as Result[];
+    expect(results.every((r) => r.ok)).toBe(true);
+    expect(results.filter((r) => r.message === "1 entry accepted. The entrants have been e-mailed.")).toHaveLength(1);
+    expect(results.filter((r) => r.message === "1 entry was already accepted; nothing changed for it.")).toHaveLength(19);
+    expect(await auditOf([e.id], "entry.accepted")).toHaveLength(1);
+
+    await waitForMail(env.MAIL_WEB_URL, { to: ivy.email, subjectIncludes: "Decision on your entry" });
+    await new Promise((r) => setTimeout(r, 500)); // a late duplicate would have arrived by now
+    expect(await mailsTo(ivy.email)).toHaveLength(1);
+  });
+
+  it("accepting an accepted entry keeps its release time; only the entries that change are mailed", async () => {
+    const show = await showWithChair(false);
+    const rue = await entrant("Rue Invented");
+    const released = new Date("2026-04-01T12:00:00Z");
+    const done = await makeEntry(show.id, rue.id, { status: "accepted", decisionReleasedAt: released, title: "Already In" });
+    const fresh = await makeEntry(show.id, rue.id, { status: "paid", title: "Newly In" });
+    actAs(chair.cookie);
+    const r = (await acceptEntriesAction({ showSlug: show.slug, entryIds: [done.id, fresh.id] })) as Result;
+    expect(r).toMatchObject({ ok: true, message: "1 entry accepted. 1 entry was already accepted; nothing changed for it. The entrants have been e-mailed." });
+    expect((await rowsOf([done.id]))[0]!.decisionReleasedAt).toEqual(released);
+    expect(await auditOf([done.id])).toEqual([]);
+    const mail = await waitForMail(env.MAIL_WEB_URL, { to: rue.email, subjectIncludes: "Decision on your entry" });
+    expect(mail.text).toContain("Newly In");
+    expect(mail.text).not.toContain("Already In");
+  });
+});
+
 describe("a juried show", () => {
   it("records decisions without mail, then releases them in one mail per entrant", async () => {
     const show = await showWithChair(true);

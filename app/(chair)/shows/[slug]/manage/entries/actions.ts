@@ -24,20 +24,25 @@ async function mailDecisions(entryIds: string[], done: string): Promise<{ messag
   }
 }
 
+/** What a decision did, in words; entries that already had it are named apart and never mailed. */
+async function reportDecision(r: { juried: boolean; entryIds: string[]; unchanged: number }, verb: "accepted" | "declined") {
+  const already = r.unchanged ? ` ${plural(r.unchanged, "entry was", "entries were")} already ${verb}; nothing changed for ${r.unchanged === 1 ? "it" : "them"}.` : "";
+  if (r.entryIds.length === 0) return { message: already.trim() };
+  const done = `${plural(r.entryIds.length, "entry", "entries")} ${verb}.${already}`;
+  if (r.juried) return { message: `${done} Entrants hear when you release decisions.` };
+  return mailDecisions(r.entryIds, done);
+}
+
 export const acceptEntriesAction = defineAction(acceptEntriesSchema, async (input, viewer) => {
   const r = await acceptEntries(viewer, input.showSlug, input.entryIds);
   revalidate(r.show.slug);
-  const done = `${plural(r.entryIds.length, "entry", "entries")} accepted.`;
-  if (r.juried) return { message: `${done} Entrants hear when you release decisions.` };
-  return mailDecisions(r.entryIds, done);
+  return reportDecision(r, "accepted");
 });
 
 export const declineEntriesAction = defineAction(declineEntriesSchema, async (input, viewer) => {
   const r = await declineEntries(viewer, input.showSlug, input.entryIds, input.reason);
   revalidate(r.show.slug);
-  const done = `${plural(r.entryIds.length, "entry", "entries")} declined.`;
-  if (r.juried) return { message: `${done} Entrants hear when you release decisions.` };
-  return mailDecisions(r.entryIds, done);
+  return reportDecision(r, "declined");
 });
 
 export const markPaidOfflineAction = defineAction(markPaidOfflineSchema, async (input, viewer) => {
