@@ -1,6 +1,7 @@
 // Public list of shows; the platform administrator creates new ones here.
 import { createShow, listPublicShows } from "@/db/queries/shows";
 import { defineRoute } from "@/lib/api";
+import { errorSummary } from "@/lib/error-log";
 import { sendInvitationMail } from "@/lib/invitation-mail";
 import { createShowSchema } from "@/lib/schemas/show";
 
@@ -12,7 +13,7 @@ export const POST = defineRoute({ access: "user", input: createShowSchema }, asy
   try {
     await sendInvitationMail({ email: input.chairEmail, role: "chair", showName: show.name, inviterName: viewer!.name, token });
   } catch (err) {
-    console.error("[api] chair invitation mail failed", err);
+    console.error("[api] chair invitation mail failed", errorSummary(err));
     chairInvited = false;
   }
   return { show, chairInvited };

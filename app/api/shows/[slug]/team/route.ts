@@ -1,6 +1,7 @@
 // The chair's view of the show team, and inviting a judge, scribe or intake volunteer.
 import { inviteToTeam, teamForChair } from "@/db/queries/team";
 import { defineRoute } from "@/lib/api";
+import { errorSummary } from "@/lib/error-log";
 import { sendInvitationMail } from "@/lib/invitation-mail";
 import { inviteSchema } from "@/lib/schemas/show";
 
@@ -17,7 +18,7 @@ export const POST = defineRoute<{ slug: string }, typeof inviteSchema>(
     try {
       await sendInvitationMail({ email: input.email, role: input.role, showName: show.name, inviterName: viewer!.name, token });
     } catch (err) {
-      console.error("[api] invitation mail failed", err);
+      console.error("[api] invitation mail failed", errorSummary(err));
       mailed = false;
     }
     return { invited: input.email, role: input.role, mailed };
