@@ -4,6 +4,7 @@
 import "server-only";
 import type { z } from "zod";
 import { AppError, type FieldErrors } from "@/lib/errors";
+import { errorSummary } from "@/lib/error-log";
 import { getViewer, type Viewer } from "@/lib/session";
 import { fieldErrorsOf, formDataToObject } from "@/lib/validation";
 
@@ -56,7 +57,8 @@ export function defineAction<S extends z.ZodType, T = undefined>(schema: S, hand
       }
       // Next.js signals redirect()/notFound() by throwing; let those through.
       if (isNextControlFlow(err)) throw err;
-      console.error("[action] unexpected failure", err);
+      // Kind, code and stack frames only: the message or a query's parameters can hold what was typed.
+      console.error("[action] unexpected failure", errorSummary(err));
       return { ok: false, status: 500, message: "Something went wrong on our side; nothing was saved.", values: safeValues };
     }
   };
