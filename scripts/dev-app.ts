@@ -4,7 +4,7 @@
 // show when the database has none. Usage: tsx scripts/dev-app.ts 3301 [--fresh]
 import { spawn } from "node:child_process";
 import { migrateDatabase } from "../db/migrate";
-import { must, NEXT, profileEnv, recreateDatabase, ROOT, say, waitForHealth, type Env } from "./lib/app";
+import { LOOPBACK, must, nextServerArgs, profileEnv, recreateDatabase, ROOT, say, waitForHealth, type Env } from "./lib/app";
 
 async function main() {
   const port = process.argv[2] ?? "3301";
@@ -13,7 +13,7 @@ async function main() {
   if (process.argv.includes("--fresh")) await recreateDatabase(env.DATABASE_URL!);
   await migrateDatabase(env.DATABASE_URL!);
   await must("seeding the demo show", "npx", ["tsx", "scripts/seed.ts"], env);
-  const app = spawn(process.execPath, [NEXT, "dev", "-p", port, "-H", "127.0.0.1"], { cwd: ROOT, env: { ...process.env, ...env }, stdio: "inherit" });
+  const app = spawn(process.execPath, nextServerArgs("dev", port, LOOPBACK), { cwd: ROOT, env: { ...process.env, ...env }, stdio: "inherit" });
   await waitForHealth(env.APP_URL!, 180_000);
   say(`dev app at ${env.APP_URL} (Ctrl-C stops it)`);
   const stop = () => app.kill("SIGTERM");

@@ -1,6 +1,8 @@
 // Loopback ports and environments for the two ways Ribbonry runs here: `npm start` (dev) and
 // `npm test` (test), and `npm run bench` (bench). All may run at once; they share the PostgreSQL
 // server, not the database.
+import { localSecrets } from "./local-secrets";
+
 export type Profile = "start" | "test" | "bench";
 
 export const PG_PORT = Number(process.env.RIBBONRY_PG_PORT ?? 54329);
@@ -15,7 +17,11 @@ export function portsFor(profile: Profile) {
   return ports[profile];
 }
 
-/** The environment the app, the fakes and the tests share for a profile (defaults only). */
+/**
+ * The environment the app, the fakes and the tests share for a profile: loopback addresses, the
+ * secrets generated into .data/secrets.json, and RIBBONRY_LOCAL=1, which lets lib/env.ts treat a
+ * production build on these addresses as the local set-up.
+ */
 export function envFor(profile: Profile): Record<string, string> {
   const p = ports[profile];
   const database = profile === "start" ? "ribbonry" : `ribbonry_${profile}`;
@@ -32,7 +38,11 @@ export function envFor(profile: Profile): Record<string, string> {
     STRIPE_API_HOST: "127.0.0.1",
     STRIPE_API_PORT: String(p.payments),
     STRIPE_API_PROTOCOL: "http",
-    STRIPE_SECRET_KEY: "sk_test_ribbonry_local",
-    STRIPE_WEBHOOK_SECRET: "whsec_ribbonry_local",
+    // s3rver knows only its own fixed key pair (node_modules/s3rver/lib/models/account.js);
+    // lib/env.ts refuses it for any S3 that is not on this machine.
+    S3_ACCESS_KEY_ID: "S3RVER",
+    S3_SECRET_ACCESS_KEY: "S3RVER",
+    RIBBONRY_LOCAL: "1",
+    ...localSecrets(),
   };
 }

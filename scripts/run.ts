@@ -7,34 +7,47 @@ import fs from "node:fs/promises";
 import path from "node:path";
 import { migrateDatabase } from "../db/migrate";
 import { DEMO_ACCOUNTS, DEMO_PASSWORD } from "../db/seed/demo-data";
+import { isLoopbackHost, notLocalReasons } from "../lib/local-setup";
 import type { Services } from "./services";
-import { ensureDatabase, must, NEXT, profileEnv, recreateDatabase, ROOT, run, say, serve, startAll, waitForHealth, type Env } from "./lib/app";
+import { ensureDatabase, listenHost, must, NEXT, nextServerArgs, profileEnv, recreateDatabase, ROOT, run, say, serve, startAll, waitForHealth, type Env } from "./lib/app";
 
 // The offline worker (app/sw.ts) is built from the finished Next build (serwist.config.mjs).
 const SERWIST = path.join(ROOT, "node_modules/@serwist/cli/cli.js");
 
-function banner(env: Env, services: Services) {
+function banner(env: Env, services: Services, host: string, seeded: boolean) {
+  const reach = isLoopbackHost(host) ? "from this machine only" : `on ${host} (RIBBONRY_HOST): other machines can reach it`;
   const lines = [
     "",
-    `Ribbonry is running at ${env.APP_URL}`,
+    `Ribbonry is running at ${env.APP_URL}, ${reach}`,
     `  caught mail:     ${env.MAIL_WEB_URL}`,
     `  photo store:     ${env.S3_ENDPOINT} (s3rver)`,
     `  payments fake:   ${services.urls.payments ?? `http://127.0.0.1:${env.STRIPE_API_PORT}`}`,
     "",
-    `Demo accounts (password for all: ${DEMO_PASSWORD})`,
-    ...DEMO_ACCOUNTS.filter((a) => a.role !== "entrant" || a.email === "entrant1@ribbonry.test").map(
-      (a) => `  ${a.role.padEnd(8)} ${a.email.padEnd(26)} ${a.name}`,
-    ),
-    "  entrant  entrant2@ribbonry.test … entrant40@ribbonry.test",
-    "",
+    ...(seeded
+      ? [
+          `Demo accounts (password for all: ${DEMO_PASSWORD})`,
+          ...DEMO_ACCOUNTS.filter((a) => a.role !== "entrant" || a.email === "entrant1@ribbonry.test").map(
+            (a) => `  ${a.role.padEnd(8)} ${a.email.padEnd(26)} ${a.name}`,
+          ),
+          "  entrant  entrant2@ribbonry.test … entrant40@ribbonry.test",
+          "",
+        ]
+      : []),
     "Press Ctrl-C to stop.",
   ];
   console.log(lines.join("\n"));
 }
 
+/** An address that reaches a server listening on `host` (a wildcard is reached on loopback). */
+function probeHost(host: string): string {
+  if (host === "0.0.0.0" || host === "::") return "127.0.0.1";
+  return host.includes(":") ? `[${host}]` : host;
+}
+
 async function start(dev: boolean) {
   const env = profileEnv("start");
   if (dev) env.NODE_ENV = "development";
+  const host = listenHost(process.env);
   await ensureDatabase(env.DATABASE_URL!);
   await migrateDatabase(env.DATABASE_URL!);
   say("migrations applied");
@@ -47,16 +60,19 @@ async function start(dev: boolean) {
   };
   process.on("SIGINT", stop);
   process.on("SIGTERM", stop);
-  await must("seeding the demo show", "npx", ["tsx", "scripts/seed.ts"], env);
+  // The demo accounts share a published password: only ever into the local set-up.
+  const notLocal = notLocalReasons(env);
+  if (notLocal.length) say(`not seeding the demo accounts: this is not the local set-up (${notLocal.join("; ")})`);
+  else await must("seeding the demo show", "npx", ["tsx", "scripts/seed.ts"], env);
   if (dev) {
-    app = spawn(process.execPath, [NEXT, "dev", "-p", env.PORT!], { cwd: ROOT, env: { ...process.env, ...env }, stdio: "inherit" });
+    app = spawn(process.execPath, nextServerArgs("dev", env.PORT!, host), { cwd: ROOT, env: { ...process.env, ...env }, stdio: "inherit" });
   } else {
     await must("next build", process.execPath, [NEXT, "build"], env);
     await must("serwist build", process.execPath, [SERWIST, "build", "serwist.config.mjs"], env);
-    app = serve(env, env.PORT!);
+    app = serve(env, env.PORT!, host);
   }
-  await waitForHealth(`http://127.0.0.1:${env.PORT}`, 180_000);
-  banner(env, services);
+  await waitForHealth(`http://${probeHost(host)}:${env.PORT}`, 180_000);
+  banner(env, services, host, notLocal.length === 0);
   app.on("exit", async (code) => {
     say(`the app stopped (exit ${code})`);
     await services.stop();

@@ -1,6 +1,7 @@
 // `npm run db:seed`: puts the demo show, its people and 120 quilts (with generated photos) into
 // DATABASE_URL and the photo bucket, unless the demo show is already there, and last year's show
-// with its results published. Safe to run again.
+// with its results published. Safe to run again. Every demo account shares the published password
+// DEMO_PASSWORD, so it refuses any database that is not the local set-up's (lib/local-setup.ts).
 // Reads process.env itself: db/client.ts and lib/env.ts import "server-only", which tsx cannot load.
 import { CreateBucketCommand, HeadBucketCommand, PutObjectCommand, S3Client } from "@aws-sdk/client-s3";
 import { drizzle } from "drizzle-orm/postgres-js";
@@ -9,6 +10,7 @@ import * as schema from "../db/schema";
 import { DEMO_ACCOUNTS, DEMO_PASSWORD, DEMO_SHOW } from "../db/seed/demo-data";
 import { LAST_YEAR_SHOW, seedLastYear } from "../db/seed/demo-last-year";
 import { seedDemo } from "../db/seed/seed-demo";
+import { notLocalReasons } from "../lib/local-setup";
 
 // The same names and defaults as lib/env.ts.
 const config = {
@@ -88,7 +90,24 @@ function printAccounts(): void {
   for (const r of rows) console.log(line(r));
 }
 
+/** The demo accounts' password is in the README: never into a database someone else can reach. */
+function refuseOutsideLocalSetup(): void {
+  const reasons = notLocalReasons({
+    NODE_ENV: process.env.NODE_ENV,
+    RIBBONRY_LOCAL: process.env.RIBBONRY_LOCAL,
+    DATABASE_URL: config.databaseUrl,
+    S3_ENDPOINT: config.s3.endpoint,
+    STRIPE_API_HOST: process.env.STRIPE_API_HOST ?? "127.0.0.1",
+  });
+  if (reasons.length === 0) return;
+  throw new Error(
+    `refused: the demo accounts all use the published password "${DEMO_PASSWORD}", so they are seeded only ` +
+      `into the local set-up (everything on this machine), and this is not it: ${reasons.join("; ")}.`,
+  );
+}
+
 async function main(): Promise<void> {
+  refuseOutsideLocalSetup();
   const sql = postgres(config.databaseUrl, { max: 4, onnotice: () => {} });
   const s3 = makeS3();
   try {

@@ -3,6 +3,7 @@
 import { spawn, type ChildProcess } from "node:child_process";
 import path from "node:path";
 import postgres from "postgres";
+import { notLocalReasons } from "../../lib/local-setup";
 import { envFor, type Profile } from "../ports";
 import { startServices, type Services } from "../services";
 
@@ -12,6 +13,9 @@ export const say = (msg: string) => console.log(`\x1b[1;35m[ribbonry]\x1b[0m ${m
 
 export type Env = Record<string, string>;
 
+// The generated secrets (.data/secrets.json) and s3rver's fixed keys belong to the local set-up.
+const LOCAL_ONLY = ["BETTER_AUTH_SECRET", "STRIPE_WEBHOOK_SECRET", "STRIPE_SECRET_KEY", "S3_ACCESS_KEY_ID", "S3_SECRET_ACCESS_KEY"];
+
 export function profileEnv(profile: Profile): Env {
   const base = envFor(profile);
   if (profile !== "start") {
@@ -20,7 +24,23 @@ export function profileEnv(profile: Profile): Env {
     return { ...base, NODE_ENV: "production", NEXT_TELEMETRY_DISABLED: "1" };
   }
   const fromProcess = Object.fromEntries(Object.keys(base).filter((k) => process.env[k]).map((k) => [k, process.env[k]!]));
-  return { ...base, ...fromProcess, NODE_ENV: "production", NEXT_TELEMETRY_DISABLED: "1" };
+  const env: Env = { ...base, ...fromProcess, NODE_ENV: "production", NEXT_TELEMETRY_DISABLED: "1" };
+  // Pointed at a real database or service, `npm start` uses the operator's own secrets only:
+  // lib/env.ts then names each one that is missing.
+  if (notLocalReasons(env).length) for (const k of LOCAL_ONLY) if (!fromProcess[k]) delete env[k];
+  return env;
+}
+
+/** Where `next start` / `next dev` listen: loopback unless RIBBONRY_HOST names another address. */
+export const LOOPBACK = "127.0.0.1";
+
+export function listenHost(vars: Record<string, string | undefined>): string {
+  return vars.RIBBONRY_HOST?.trim() || LOOPBACK;
+}
+
+/** The arguments after `node` for Next's server; always an explicit -H (Next's default is every interface). */
+export function nextServerArgs(command: "start" | "dev", port: string, host: string = LOOPBACK): string[] {
+  return [NEXT, command, "-p", port, "-H", host];
 }
 
 export function run(cmd: string, args: string[], env: Env, opts: { quiet?: boolean } = {}): Promise<number> {
@@ -35,9 +55,8 @@ export async function must(what: string, cmd: string, args: string[], env: Env) 
   if (code !== 0) throw new Error(`${what} failed (exit ${code})`);
 }
 
-export function serve(env: Env, port: string, host?: string): ChildProcess {
-  const args = [NEXT, "start", "-p", port, ...(host ? ["-H", host] : [])];
-  return spawn(process.execPath, args, { cwd: ROOT, env: { ...process.env, ...env }, stdio: "inherit" });
+export function serve(env: Env, port: string, host: string = LOOPBACK): ChildProcess {
+  return spawn(process.execPath, nextServerArgs("start", port, host), { cwd: ROOT, env: { ...process.env, ...env }, stdio: "inherit" });
 }
 
 export async function waitForHealth(url: string, timeoutMs = 60_000) {
