@@ -1,6 +1,7 @@
 "use client";
 // The judging list: big type, by entry number, with "jump to entry number" for the judging
-// table. Blind: the data has no maker, quilter or entrant in it (db/queries/judging.ts).
+// table. Blind: the data has no maker, quilter or entrant in it, and only the facts the show
+// releases (db/queries/judging-scope.ts); a fact not sent is simply not shown.
 import { useRef, useState, type FormEvent } from "react";
 import { ArrowDown, Hash } from "lucide-react";
 import { DIVISION_LABELS, labelOf, QUILTING_METHOD_LABELS } from "@/components/entries/labels";
@@ -8,17 +9,16 @@ import { Badge } from "@/components/ui/badge";
 import { Button } from "@/components/ui/button";
 import { controlClasses, FieldError } from "@/components/ui/field";
 import { cx } from "@/components/ui/cx";
-import { formatSize } from "@/scoring/units";
 
+/** An entry of the viewer's sessions with only the facts the show releases (any may be absent). */
 export type QueueEntry = {
   entryNumber: number;
-  title: string;
-  widthUm: number;
-  lengthUm: number;
-  techniques: string[];
-  quiltingMethod: string;
-  division: string;
-  judged: boolean;
+  title?: string;
+  size?: string;
+  techniques?: string[];
+  quiltingMethod?: string;
+  pattern?: string;
+  division?: string;
 };
 
 export function JudgingQueue({ entries }: { entries: QueueEntry[] }) {
@@ -93,12 +93,15 @@ export function JudgingQueue({ entries }: { entries: QueueEntry[] }) {
               <span>{e.entryNumber}</span>
             </p>
             <div className="mt-3 min-w-0 space-y-2 sm:mt-0">
-              <h2 className="text-2xl sm:text-3xl">{e.title}</h2>
-              <p className="text-lg">{formatSize(e.widthUm, e.lengthUm)}</p>
-              <p className="text-lg text-ink-muted">
-                {labelOf(QUILTING_METHOD_LABELS, e.quiltingMethod)} · {labelOf(DIVISION_LABELS, e.division)} division
-              </p>
-              {e.techniques.length ? (
+              <h2 className="text-2xl sm:text-3xl">{e.title ?? `Entry ${e.entryNumber}`}</h2>
+              {e.size ? <p className="text-lg">{e.size}</p> : null}
+              {e.quiltingMethod || e.division ? (
+                <p className="text-lg text-ink-muted">
+                  {[e.quiltingMethod ? labelOf(QUILTING_METHOD_LABELS, e.quiltingMethod) : null, e.division ? `${labelOf(DIVISION_LABELS, e.division)} division` : null].filter(Boolean).join(" · ")}
+                </p>
+              ) : null}
+              {e.pattern ? <p className="text-lg text-ink-muted">{e.pattern}</p> : null}
+              {e.techniques?.length ? (
                 <ul className="flex flex-wrap gap-2" aria-label="Techniques">
                   {e.techniques.map((t) => (
                     <li key={t}>
@@ -107,7 +110,6 @@ export function JudgingQueue({ entries }: { entries: QueueEntry[] }) {
                   ))}
                 </ul>
               ) : null}
-              {e.judged ? null : <Badge tone="warning">Display only — not judged</Badge>}
             </div>
           </li>
         ))}

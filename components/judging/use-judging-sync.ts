@@ -2,7 +2,8 @@
 // Sends the outbox in the background: a TanStack Query mutation per flush, retried with backoff,
 // kicked after every change, on the browser's `online` event and on an interval. Answers update
 // the tablet's sheets and outbox (local-db.ts applyAnswer). A 409 (the show isn't judging) keeps
-// every change queued; nothing is ever dropped because the network failed.
+// every change queued; a 403 naming entries sets aside only those entries' changes; nothing is
+// ever dropped because the network failed.
 import { useCallback, useEffect, useRef, useState } from "react";
 import { useMutation } from "@tanstack/react-query";
 import { applyAnswer, deviceId, localDb, pendingRows, refuseRows } from "./local-db";
@@ -23,6 +24,7 @@ async function flush(slug: string): Promise<number> {
   const db = localDb();
   const device = await deviceId(db);
   let sent = 0;
+  let resend = false;
   for (const batch of batches(await pendingRows(db, slug))) {
     let res: Response;
     try {
@@ -35,8 +37,16 @@ async function flush(slug: string): Promise<number> {
     } catch {
       throw new SyncError({ kind: "offline", text: "No connection to the server. Changes are saved on this tablet and will be sent when it is back." }, true);
     }
-    const body = (await res.json().catch(() => null)) as { results?: SyncResultRow[]; sheets?: ServerSheet[]; message?: string; error?: string } | null;
+    const body = (await res.json().catch(() => null)) as { results?: SyncResultRow[]; sheets?: ServerSheet[]; message?: string; error?: string; fieldErrors?: Record<string, string[]> } | null;
     const message = body?.message ?? body?.error;
+    const perEntry = res.status === 403 ? batch.rows.filter((r) => body?.fieldErrors?.[r.entryId]?.length) : [];
+    if (perEntry.length) {
+      // Refused for some entries only (the chair has a conflict on record for the judge): those
+      // changes are set aside with the server's words, the others are sent again at once.
+      for (const r of perEntry) await refuseRows(db, [r.key], body!.fieldErrors![r.entryId]![0]!);
+      if (perEntry.length < batch.rows.length) resend = true;
+      continue;
+    }
     if (res.status === 409) throw new SyncError({ kind: "closed", text: message ?? "Judging isn't open at this show; changes stay on this tablet until it is." }, false);
     if (res.status === 401) throw new SyncError({ kind: "signed-out", text: "Sign in again to send your changes; they are kept on this tablet." }, false);
     if (res.status === 403 || res.status === 400 || res.status === 404) {
@@ -48,7 +58,8 @@ async function flush(slug: string): Promise<number> {
     await applyAnswer(db, slug, { results: body.results, sheets: body.sheets ?? [] });
     sent += batch.rows.length;
   }
-  return sent;
+  // Each refusal above left fewer rows pending, so this ends.
+  return resend ? sent + (await flush(slug)) : sent;
 }
 
 const INTERVAL_MS = 15_000;

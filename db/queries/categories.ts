@@ -7,6 +7,7 @@ import { and, asc, eq, inArray, notInArray, sql } from "drizzle-orm";
 import { db, type Tx } from "@/db/client";
 import { categories, entries, showSettings, shows, type Entry } from "@/db/schema";
 import { writeAudit } from "@/db/queries/audit";
+import { conflictBlockers, noteConflicts } from "@/db/queries/judge-conflicts";
 import { lockShow, settingsForShowId } from "@/db/queries/settings";
 import { badInput, conflict, notFound } from "@/lib/errors";
 import { asConditions, type CategorySetInput } from "@/lib/schemas/categories";
@@ -110,6 +111,9 @@ export async function decideEntryTx(tx: Tx, entry: Entry, actorUserId: string | 
       after: { category: describeOutcome(placement.outcome, prepared.byId), ...placement.outcome, reasons: placement.reasons, cause },
     });
   }
+  // A judge of its category may now have a conflict with this entry (a move, a maker's name
+  // changed): kept for the chair.
+  await noteConflicts(tx, entry.showId, { entryIds: [entry.id] }, "category_move", actorUserId);
   return placement;
 }
 
@@ -262,6 +266,7 @@ export async function saveCategorySet(viewer: Viewer, slug: string, input: Categ
         });
       }
     }
+    if (moved.size) await noteConflicts(tx, showId, { entryIds: [...moved] }, "category_move", viewer.id);
     const removed = before.filter((c) => !byIdAfter.has(c.id)).map((c) => c.id);
     if (removed.length) await tx.delete(categories).where(inArray(categories.id, removed));
     await tx
@@ -312,18 +317,20 @@ export async function placeOnSubmission(tx: Tx, entry: Entry, limits: { maxEntri
   return { columns: columnsForPlacement(placement, "", new Date()), placement, waitlistReason };
 }
 
-/** Why judging can't start yet, as far as categories go; empty when it can. */
+/** Why judging can't start yet (categories, judges' open conflicts); empty when it can. */
 export async function judgingBlockers(tx: Reader, showId: string): Promise<string[]> {
-  const [set, [open]] = await Promise.all([
+  const [set, [open], conflicts] = await Promise.all([
     categorySetFor(showId, tx),
     tx
       .select({ n: sql<number>`count(*)::int` })
       .from(entries)
       .where(and(eq(entries.showId, showId), notInArray(entries.status, [...NOT_PLACED]), inArray(entries.categoryState, ["undecided", "fits_none", "fits_several"]))),
+    conflictBlockers(tx, showId),
   ]);
   const reasons: string[] = [];
   if (activeCategories(set).length === 0) reasons.push("Set up the categories first (Categories).");
   const n = open?.n ?? 0;
   if (n > 0) reasons.push(`${n} ${n === 1 ? "entry has" : "entries have"} no category yet; place ${n === 1 ? "it" : "them"} from the queue first (Categories).`);
+  reasons.push(...conflicts);
   return reasons;
 }

@@ -6,6 +6,7 @@ import { and, asc, eq, inArray, notInArray, or, sql } from "drizzle-orm";
 import { db, type Tx } from "@/db/client";
 import { entries, showSettings, shows, type Entry } from "@/db/schema";
 import { writeAudit } from "@/db/queries/audit";
+import { noteConflicts } from "@/db/queries/judge-conflicts";
 import { categoriesLocked, categorySetFor, columnsForPlacement, decideEntryTx, LOCKED_MESSAGE, NOT_PLACED, outcomeOfRow, preparedFor } from "@/db/queries/categories";
 import { lockShow, settingsForShowId } from "@/db/queries/settings";
 import { badInput, conflict, notFound } from "@/lib/errors";
@@ -95,6 +96,7 @@ export async function overrideEntryCategory(viewer: Viewer, slug: string, input:
       before: { category: describeOutcome(before, prepared.byId), ...before },
       after: { category: describeOutcome(placement.outcome, prepared.byId), ...placement.outcome, reason: input.reason },
     });
+    await noteConflicts(tx, showId, { entryIds: [entry.id] }, "category_move", viewer.id);
     return { entryNumber: entry.entryNumber, category: describeOutcome(placement.outcome, prepared.byId) };
   });
 }

@@ -8,6 +8,7 @@ import { writeAudit } from "@/db/queries/audit";
 import { assertEditable, editBlock, entryAccess, showFacts } from "@/db/queries/entry-access";
 import { settingsForShowId, type EffectiveSettings } from "@/db/queries/settings";
 import { categoriesLocked, decideEntryTx, placeOnSubmission } from "@/db/queries/categories";
+import { noteConflicts } from "@/db/queries/judge-conflicts";
 import { entryWindow } from "@/components/shows/entry-window";
 import { badInput, conflict, notFound } from "@/lib/errors";
 import { sendEntryReceivedMail } from "@/lib/entry-mails";
@@ -238,6 +239,9 @@ export async function submitEntry(viewer: Viewer, entryId: string, input: Submit
       before: { status: "draft" },
       after: { status: "submitted", entryNumber, waitlisted, waitlistReason, rulesVersionId: rules?.id ?? null, categoryState: placed.placement.outcome.state, categoryId: placed.columns.categoryId, categoryReasons: placed.placement.reasons },
     });
+    // A judge of this category may be the entrant, a maker or a declared person: the entry goes in
+    // all the same, and the conflict waits for the chair (never shown to the entrant or the judge).
+    await noteConflicts(tx, a.show.id, { entryIds: [entryId] }, "submission", null);
     return { entryNumber, waitlisted };
   });
   try {

@@ -1,14 +1,15 @@
 // An entry's photos: a presigned upload to a private key, the check and clean-up of the uploaded
-// file before it is attached, and serving the bytes only to the entrant and the show's team.
+// file before it is attached, and serving the bytes only to those who may see them (photoForViewer).
 import "server-only";
 import { randomUUID } from "node:crypto";
 import { and, eq } from "drizzle-orm";
 import { db } from "@/db/client";
 import { entries, entryPhotos } from "@/db/schema";
 import { writeAudit } from "@/db/queries/audit";
+import { inSessions, judgingScope } from "@/db/queries/judging-scope";
 import { assertEditable, entryAccess } from "@/db/queries/entry-access";
 import { settingsForShowId, type EffectiveSettings } from "@/db/queries/settings";
-import { badInput, forbiddenError, notFound } from "@/lib/errors";
+import { badInput, notFound } from "@/lib/errors";
 import { isUuid } from "@/lib/ids";
 import type { EntryPhotoView, PhotoSize, PhotoView } from "@/lib/schemas/entry";
 import { hasShowRole, type Viewer } from "@/lib/session";
@@ -140,18 +141,31 @@ async function removeUpload(key: string): Promise<void> {
   await deleteObject(key).catch((err: unknown) => console.error("[entries] could not remove raw upload", { key, err }));
 }
 
-/** Which stored object a viewer may see: the entrant who owns it, or the show's chair, intake, judges and scribes. */
+/**
+ * Which stored object a viewer may see: the entrant who owns it and the show's chair always;
+ * intake once the entry is sent (they check quilts in); a judge or scribe only for an entry of
+ * their own sessions (judging-scope.ts). Drafts are the owner's and the chair's alone. Everyone
+ * else gets the same 404 as a missing photo, so an id confirms nothing.
+ */
 export async function photoForViewer(viewer: Viewer, photoId: string, size: PhotoSize = "web"): Promise<{ key: string; contentType: string }> {
-  if (!isUuid(photoId)) throw notFound("There is no such photo.");
+  const missing = () => notFound("There is no such photo.");
+  if (!isUuid(photoId)) throw missing();
   const [row] = await db
-    .select({ storageKey: entryPhotos.storageKey, webKey: entryPhotos.webKey, thumbKey: entryPhotos.thumbKey, contentType: entryPhotos.contentType, showId: entries.showId, entrantUserId: entries.entrantUserId })
+    .select({ storageKey: entryPhotos.storageKey, webKey: entryPhotos.webKey, thumbKey: entryPhotos.thumbKey, contentType: entryPhotos.contentType, entryId: entries.id, showId: entries.showId, entrantUserId: entries.entrantUserId, status: entries.status })
     .from(entryPhotos)
     .innerJoin(entries, eq(entries.id, entryPhotos.entryId))
     .where(eq(entryPhotos.id, photoId));
-  if (!row) throw notFound("There is no such photo.");
-  const allowed = row.entrantUserId === viewer.id || hasShowRole(viewer, row.showId, ["chair", "intake", "judge", "scribe"]);
-  if (!allowed) throw forbiddenError("This photo belongs to another entrant.");
-  return { key: keyForSize(row, size), contentType: row.contentType };
+  if (!row) throw missing();
+  const found = { key: keyForSize(row, size), contentType: row.contentType };
+  if (row.entrantUserId === viewer.id || hasShowRole(viewer, row.showId, ["chair"])) return found;
+  if (row.status === "draft") throw missing();
+  if (hasShowRole(viewer, row.showId, ["intake"])) return found;
+  if (hasShowRole(viewer, row.showId, ["judge", "scribe"])) {
+    const { categoryIds } = await judgingScope(db, row.showId, viewer.id);
+    const [inSession] = categoryIds.length ? await db.select({ id: entries.id }).from(entries).where(and(eq(entries.id, row.entryId), inSessions(row.showId, categoryIds))) : [];
+    if (inSession) return found;
+  }
+  throw missing();
 }
 
 /** The stored version of a photo for a size; the original where that version was never made. */

@@ -2,87 +2,39 @@
 // own facts only (the fields the show releases), never the entrant, maker or quilter, their
 // contact or guild. Sheet changes from tablets are merged by scoring/sheet-sync.ts.
 import "server-only";
-import { and, asc, eq, inArray, isNotNull, notInArray } from "drizzle-orm";
+import { and, asc, eq, inArray } from "drizzle-orm";
 import { db, type Tx } from "@/db/client";
-import { categories, entries, entryPhotos, judgeSheets, judgingPanels, panelCategories, panelMembers, scoreChanges, scoreSheets, user } from "@/db/schema";
+import { categories, entries, entryPhotos, judgeSheets, scoreChanges, scoreSheets, user } from "@/db/schema";
 import { writeAudit } from "@/db/queries/audit";
 import { settingsForShowId } from "@/db/queries/settings";
-import { JUDGED_OUT } from "@/db/queries/judging-setup";
-import { conflict, forbiddenError } from "@/lib/errors";
+import { JUDGED_OUT, openConflicts } from "@/db/queries/judge-conflicts";
+import { inSessions, judgingScope, QUILT_FACTS, releasedFacts } from "@/db/queries/judging-scope";
+import { AppError, conflict, forbiddenError } from "@/lib/errors";
 import type { SyncBatch } from "@/lib/schemas/judging";
 import { AREA_ROLES, requireShowRole, type Viewer } from "@/lib/session";
 import { sheetTotal, validateMark, type Criterion, type Mark, type ScoreSheet } from "@/scoring/score-sheets";
 import { applyBatch, emptySheet, marksOfState, type ChangeOutcome, type Json, type SheetChange, type SheetState } from "@/scoring/sheet-sync";
-import { formatSize } from "@/scoring/units";
 
-/** The list page's view: entries to be judged at the show, by number. */
+/**
+ * The list page's view: the entries of the viewer's own sessions (their panels' categories), by
+ * number, with the released facts only.
+ */
 export async function judgingQueue(viewer: Viewer, showSlug: string) {
   const show = await requireShowRole(viewer, showSlug, AREA_ROLES.judging);
-  const rows = await db
-    .select({
-      entryNumber: entries.entryNumber,
-      title: entries.title,
-      widthUm: entries.widthUm,
-      lengthUm: entries.lengthUm,
-      techniques: entries.techniques,
-      quiltingMethod: entries.quiltingMethod,
-      division: entries.division,
-      judged: entries.judged,
-    })
-    .from(entries)
-    .where(and(eq(entries.showId, show.showId), isNotNull(entries.entryNumber), eq(entries.judged, true), notInArray(entries.status, [...JUDGED_OUT])))
-    .orderBy(asc(entries.entryNumber));
+  const [scope, settings] = await Promise.all([judgingScope(db, show.showId, viewer.id), settingsForShowId(show.showId)]);
+  const rows = scope.categoryIds.length
+    ? await db.select({ entryNumber: entries.entryNumber, ...QUILT_FACTS }).from(entries).where(inSessions(show.showId, scope.categoryIds)).orderBy(asc(entries.entryNumber))
+    : [];
   return {
     show: { name: show.name, slug: show.slug },
-    entries: rows.map((r) => ({ ...r, entryNumber: r.entryNumber! })),
+    entries: rows.map((r) => ({ entryNumber: r.entryNumber!, ...releasedFacts(settings.judgeFields, r) })),
   };
-}
-
-// ---- Who may score what ------------------------------------------------------------------------
-
-type Seat = { panelId: string; panelName: string; day: string; room: string; role: "judge" | "scribe" };
-
-/** The judges this viewer may score for, each with the categories they judge, via the viewer's panels. */
-async function scoringRights(reader: Pick<Tx, "select">, showId: string, viewerId: string) {
-  const seats: Seat[] = await reader
-    .select({ panelId: judgingPanels.id, panelName: judgingPanels.name, day: judgingPanels.day, room: judgingPanels.room, role: panelMembers.role })
-    .from(panelMembers)
-    .innerJoin(judgingPanels, eq(judgingPanels.id, panelMembers.panelId))
-    .where(and(eq(judgingPanels.showId, showId), eq(panelMembers.userId, viewerId)));
-  const panelIds = seats.map((s) => s.panelId);
-  if (!panelIds.length) return { seats, judges: new Map<string, { name: string; categoryIds: Set<string>; panelIds: Set<string> }>() };
-  const [judgeRows, catRows] = await Promise.all([
-    reader.select({ panelId: panelMembers.panelId, userId: panelMembers.userId, name: user.name }).from(panelMembers).innerJoin(user, eq(user.id, panelMembers.userId)).where(and(inArray(panelMembers.panelId, panelIds), eq(panelMembers.role, "judge"))),
-    reader.select({ panelId: panelCategories.panelId, categoryId: panelCategories.categoryId }).from(panelCategories).where(inArray(panelCategories.panelId, panelIds)),
-  ]);
-  const judges = new Map<string, { name: string; categoryIds: Set<string>; panelIds: Set<string> }>();
-  for (const seat of seats) {
-    // A judge scores for themselves; a scribe for every judge on their panel.
-    const forWhom = seat.role === "judge" ? judgeRows.filter((j) => j.panelId === seat.panelId && j.userId === viewerId) : judgeRows.filter((j) => j.panelId === seat.panelId);
-    for (const j of forWhom) {
-      const entry = judges.get(j.userId) ?? { name: j.name, categoryIds: new Set<string>(), panelIds: new Set<string>() };
-      entry.panelIds.add(seat.panelId);
-      for (const c of catRows.filter((c) => c.panelId === seat.panelId)) entry.categoryIds.add(c.categoryId);
-      judges.set(j.userId, entry);
-    }
-  }
-  return { seats, judges };
 }
 
 async function sheetsOfShow(reader: Pick<Tx, "select">, showId: string) {
   const rows = await reader.select({ id: scoreSheets.id, name: scoreSheets.name, sheet: scoreSheets.sheet, isDefault: scoreSheets.isDefault }).from(scoreSheets).where(eq(scoreSheets.showId, showId));
   return { byId: new Map(rows.map((r) => [r.id, r])), defaultId: rows.find((r) => r.isDefault)?.id ?? rows[0]?.id ?? null };
 }
-
-const released = (fields: readonly string[], e: { title: string; widthUm: number; lengthUm: number; techniques: string[]; quiltingMethod: string; patternSource: string; patternName: string; patternDesigner: string; statement: string; division: string }) => ({
-  ...(fields.includes("title") ? { title: e.title } : {}),
-  ...(fields.includes("size") ? { widthUm: e.widthUm, lengthUm: e.lengthUm, size: formatSize(e.widthUm, e.lengthUm) } : {}),
-  ...(fields.includes("techniques") ? { techniques: e.techniques } : {}),
-  ...(fields.includes("quiltingMethod") ? { quiltingMethod: e.quiltingMethod } : {}),
-  ...(fields.includes("pattern") ? { pattern: e.patternSource === "original" ? "Original design" : [e.patternName, e.patternDesigner && `by ${e.patternDesigner}`].filter(Boolean).join(" ") || "From a pattern" } : {}),
-  ...(fields.includes("statement") ? { statement: e.statement } : {}),
-  ...(fields.includes("division") ? { division: e.division } : {}),
-});
 
 const sheetView = (row: { id: string; entryId: string; judgeUserId: string; status: string; version: number; state: SheetState } | undefined, entryId: string, judgeUserId: string) => {
   const state = row?.state ?? emptySheet();
@@ -104,31 +56,12 @@ const sheetView = (row: { id: string; entryId: string; judgeUserId: string; stat
  */
 export async function judgingSession(viewer: Viewer, slug: string) {
   const show = await requireShowRole(viewer, slug, AREA_ROLES.judging);
-  const [{ seats, judges }, settings, sheets] = await Promise.all([scoringRights(db, show.showId, viewer.id), settingsForShowId(show.showId), sheetsOfShow(db, show.showId)]);
-  const categoryIds = [...new Set([...judges.values()].flatMap((j) => [...j.categoryIds]))];
+  const [{ seats, judges, categoryIds }, settings, sheets] = await Promise.all([judgingScope(db, show.showId, viewer.id), settingsForShowId(show.showId), sheetsOfShow(db, show.showId)]);
   const cats = categoryIds.length
     ? await db.select({ id: categories.id, code: categories.code, name: categories.name, method: categories.judgingMethod, scoreSheetId: categories.scoreSheetId }).from(categories).where(inArray(categories.id, categoryIds))
     : [];
   const rows = categoryIds.length
-    ? await db
-        .select({
-          id: entries.id,
-          entryNumber: entries.entryNumber,
-          categoryId: entries.categoryId,
-          title: entries.title,
-          widthUm: entries.widthUm,
-          lengthUm: entries.lengthUm,
-          techniques: entries.techniques,
-          quiltingMethod: entries.quiltingMethod,
-          patternSource: entries.patternSource,
-          patternName: entries.patternName,
-          patternDesigner: entries.patternDesigner,
-          statement: entries.statement,
-          division: entries.division,
-        })
-        .from(entries)
-        .where(and(eq(entries.showId, show.showId), inArray(entries.categoryId, categoryIds), eq(entries.judged, true), notInArray(entries.status, [...JUDGED_OUT]), isNotNull(entries.entryNumber)))
-        .orderBy(asc(entries.entryNumber))
+    ? await db.select({ id: entries.id, entryNumber: entries.entryNumber, categoryId: entries.categoryId, ...QUILT_FACTS }).from(entries).where(inSessions(show.showId, categoryIds)).orderBy(asc(entries.entryNumber))
     : [];
   const entryIds = rows.map((r) => r.id);
   const [photos, sheetRows] = entryIds.length
@@ -150,7 +83,7 @@ export async function judgingSession(viewer: Viewer, slug: string) {
       id: r.id,
       entryNumber: r.entryNumber!,
       categoryId: r.categoryId!,
-      ...released(settings.judgeFields, r),
+      ...releasedFacts(settings.judgeFields, r),
       photos: photos.filter((p) => p.entryId === r.id).map((p) => ({ id: p.id, view: p.view, widthPx: p.widthPx, heightPx: p.heightPx, webUrl: `/api/photos/${p.id}/web`, thumbUrl: `/api/photos/${p.id}/thumb` })),
     })),
     states: rows.flatMap((r) =>
@@ -195,6 +128,20 @@ function invalidValue(change: SyncBatch["changes"][number], sheet: ScoreSheet | 
 
 const marksOf = marksOfState;
 
+/**
+ * A judge with an open conflict on an entry (their own quilt, or a declared person's, not yet
+ * allowed by the chair) can't have marks taken for it: the whole batch is refused (403) and
+ * nothing is applied; `fieldErrors` names the entries, so the tablet sets only their changes
+ * aside and sends the rest again.
+ */
+async function refuseConflicted(showId: string, judgeUserId: string, judgeName: string, entryIds: string[]) {
+  if (!entryIds.length) return;
+  const found = await openConflicts(db, showId, { judgeIds: [judgeUserId], entryIds });
+  if (!found.length) return;
+  const text = (n: number | null) => `The chair has a possible conflict of interest on record for ${judgeName} and entry ${n ?? "?"}, so no marks can be taken for it until the chair decides.`;
+  throw new AppError(403, found.map((c) => text(c.entryNumber)).join(" "), Object.fromEntries(found.map((c) => [c.entryId, [text(c.entryNumber)]])));
+}
+
 export type SyncResult = {
   results: { key: string; entryId: string; outcome: ChangeOutcome; duplicate: boolean }[];
   sheets: ReturnType<typeof sheetView>[];
@@ -209,11 +156,12 @@ export async function syncSheetChanges(viewer: Viewer, slug: string, batch: Sync
   // Sheets take changes only while the show is judging; the tablet keeps them until then.
   if (show.status !== "judging") throw conflict(show.status === "results_published" || show.status === "archived" ? "Judging is over at this show; sheets are closed." : "Judging hasn't started at this show yet; changes stay on this device until it does.");
   // Independent reads in parallel: a tablet on poor Wi-Fi waits for the slowest one, not the sum.
-  const [{ judges }, settings, sheets] = await Promise.all([scoringRights(db, show.showId, viewer.id), settingsForShowId(show.showId), sheetsOfShow(db, show.showId)]);
+  const [{ judges }, settings, sheets] = await Promise.all([judgingScope(db, show.showId, viewer.id), settingsForShowId(show.showId), sheetsOfShow(db, show.showId)]);
   const rights = judges.get(batch.forJudge);
   if (!rights) throw forbiddenError(batch.forJudge === viewer.id ? "You are not on a judging panel of this show." : "You can enter scores only for a judge on your panel.");
   const byEntry = new Map<string, SyncBatch["changes"]>();
   for (const c of batch.changes) byEntry.set(c.entryId, [...(byEntry.get(c.entryId) ?? []), c]);
+  await refuseConflicted(show.showId, batch.forJudge, rights.name, [...byEntry.keys()]);
 
   return db.transaction(async (tx) => {
     const out: SyncResult = { results: [], sheets: [] };

@@ -55,9 +55,10 @@ export const routes: Record<string, Case> = {
       return { params: { id, view: "full" }, body: { uploadKey } };
     },
   },
-  // The show's team sees entry photos (judges get no maker details from them); the platform admin is not on the team.
+  // A draft's photo is its owner's and the chair's alone; anyone else gets the 404 of a missing
+  // photo (intake, judges and scribes by role are in tests/integration/judging/photo-access.test.ts).
   "GET /api/photos/[photoId]/[size]": {
-    expect: only({ entrant: 200, judge: 200, scribe: 200, intake: 200, chair: 200 }),
+    expect: only({ entrant: 200, chair: 200 }, 404),
     request: async (w) => ({ params: { photoId: await photo(w), size: "thumb" } }),
   },
 };

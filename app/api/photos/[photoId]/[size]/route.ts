@@ -1,4 +1,5 @@
-// GET: one entry photo's bytes, to the entrant who owns it and the show's team only. Photos live
+// GET: one entry photo's bytes, to whoever photoForViewer allows (owner, chair, intake once sent,
+// a judge or scribe for their own sessions); anyone else a 404. Photos live
 // in a private bucket; no public URL ever leaves the server.
 import { photoForViewer } from "@/db/queries/entry-photos";
 import { defineRoute } from "@/lib/api";
