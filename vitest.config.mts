@@ -29,7 +29,7 @@ export default defineConfig({
           environment: "node",
           globalSetup: ["tests/setup/integration-global.ts"],
           setupFiles: ["tests/setup/next-request.ts"],
-          env: { ...envFor("test"), NODE_ENV: "test", AUTH_SIGN_IN_LIMIT_PER_MINUTE: "5" },
+          env: { ...envFor("test"), NODE_ENV: "test", AUTH_SIGN_IN_LIMIT_PER_MINUTE: "5", AUTH_ACCOUNT_FAILURE_LIMIT: "5" },
           testTimeout: 30_000,
           hookTimeout: 120_000,
         },

@@ -2,28 +2,14 @@
 // local catcher: sign up → verification mail → verify → sign in; wrong password; rate limit;
 // forgotten password → reset mail → new password.
 import { describe, expect, it } from "vitest";
-import { auth } from "@/lib/auth";
 import { env } from "@/lib/env";
+import { callAuth, peerFor as ipFor } from "../../helpers/auth-http";
 import { unique } from "../../helpers/factories";
 import { waitForMail } from "../../helpers/mailbox";
 
-// Documentation-range addresses (RFC 3849, 2001:db8::/32) in a header only, so each test has a
-// rate-limit bucket of its own, new on every run; nothing is sent to them.
-const run = Math.floor(Math.random() * 0xffff).toString(16);
-const ipFor = (n: number) => `2001:db8:${run}:${n.toString(16)}::1`;
-
-async function call(pathAndQuery: string, init: { body?: unknown; ip: string; cookie?: string; method?: string }) {
-  const headers = new Headers({ origin: env.APP_URL, "x-forwarded-for": init.ip });
-  if (init.body !== undefined) headers.set("content-type", "application/json");
-  if (init.cookie) headers.set("cookie", init.cookie);
-  return auth.handler(
-    new Request(new URL(`/api/auth${pathAndQuery}`, env.APP_URL), {
-      method: init.method ?? (init.body === undefined ? "GET" : "POST"),
-      headers,
-      body: init.body === undefined ? undefined : JSON.stringify(init.body),
-    }),
-  );
-}
+// Each test's requests come from a socket address of its own (see tests/helpers/auth-http.ts).
+const call = (pathAndQuery: string, init: { body?: unknown; ip: string; cookie?: string; method?: string; forwardedFor?: string }) =>
+  callAuth(pathAndQuery, { ...init, peer: init.ip });
 
 const linkWith = (links: string[], part: string) => {
   const link = links.find((l) => l.includes(part));
@@ -90,6 +76,22 @@ describe("sign-up, verification and sign-in", () => {
     // Another address is not affected.
     const other = await call("/sign-in/email", { ip: ipFor(14), body: { email: "nobody@example.test", password: "whatever-it-is" } });
     expect(other.status).toBe(401);
+  });
+
+  it("keeps counting when each request claims a different X-Forwarded-For", async () => {
+    // A client writes X-Forwarded-For itself; with no proxy configured (TRUSTED_PROXY_HOPS=0) the
+    // socket's address decides the bucket (OWASP ASVS 4.0 §2.2.1, anti-automation).
+    const ip = ipFor(16);
+    const limit = env.AUTH_SIGN_IN_LIMIT_PER_MINUTE;
+    const statuses: number[] = [];
+    for (let i = 0; i < limit + 2; i++) {
+      const forwardedFor = `2001:db8:${(0xa000 + i).toString(16)}::${i + 1}`; // a new "client" every time
+      const email = `${unique("nobody")}@example.test`; // and a new account, so only the address limit applies
+      const res = await call("/sign-in/email", { ip, forwardedFor, body: { email, password: "whatever-it-is" } });
+      statuses.push(res.status);
+    }
+    expect(statuses.slice(0, limit).every((s) => s === 401)).toBe(true);
+    expect(statuses.slice(limit)).toEqual([429, 429]);
   });
 
   it("resets a forgotten password from the e-mailed link", async () => {

@@ -1,5 +1,6 @@
-// better-auth's endpoints (sign-up, sign-in, verification, password reset, sessions, admin).
+// better-auth's endpoints (sign-up, sign-in, verification, password reset, sessions, admin),
+// entered through handleAuthRequest so rate limits key on the real client address.
 import { toNextJsHandler } from "better-auth/next-js";
-import { auth } from "@/lib/auth";
+import { handleAuthRequest } from "@/lib/auth";
 
-export const { GET, POST } = toNextJsHandler(auth);
+export const { GET, POST } = toNextJsHandler(handleAuthRequest);
