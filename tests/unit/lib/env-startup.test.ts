@@ -35,7 +35,8 @@ function start(vars: Record<string, string | undefined>) {
   return { code: r.status, out: r.stdout, err: r.stderr };
 }
 
-describe("lib/env.ts refuses unsafe secrets at start-up", () => {
+// Each case starts tsx in a child process: seconds on a busy machine.
+describe("lib/env.ts refuses unsafe secrets at start-up", { timeout: 60_000 }, () => {
   it("production with the old default BETTER_AUTH_SECRET stops and names it", () => {
     const r = start({ ...envFor("start"), RIBBONRY_LOCAL: undefined, NODE_ENV: "production", BETTER_AUTH_SECRET: "dev-only-secret-change-me-0123456789abcdef" });
     expect(r.code).not.toBe(0);
