@@ -12,8 +12,16 @@ export function authFailure(error: NonNullable<AuthClientError>, overrides: Part
   const code = error.code ?? "";
   const custom = overrides[code];
   if (custom) return { ok: false, status: 400, ...custom };
-  if (error.status === 429) return { ok: false, status: 400, message: TOO_MANY };
+  // The per-account lock (lib/sign-in-throttle.ts) says when to try again; the per-address limit does not.
+  if (error.status === 429) return { ok: false, status: 400, message: code === "TOO_MANY_FAILED_SIGN_INS" && error.message ? error.message : TOO_MANY };
   switch (code) {
+    case "PASSWORD_TOO_COMMON": // lib/password-policy.ts
+      return {
+        ok: false,
+        status: 400,
+        message: "Some fields need attention.",
+        fieldErrors: { password: [error.message || "This password is one of the most common ones; pick a longer phrase of your own."] },
+      };
     case "INVALID_EMAIL_OR_PASSWORD":
       return { ok: false, status: 401, message: "Sign-in didn't work.", fieldErrors: { password: ["That e-mail and password don't match."] } };
     case "PASSWORD_TOO_SHORT":
