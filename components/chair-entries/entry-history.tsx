@@ -18,6 +18,7 @@ const ACTION_LABELS: Record<string, string> = {
   "entry.declined": "Declined",
   "entry.paid_offline": "Marked paid offline",
   "entry.decision_released": "Decision released to the entrant",
+  "entry.withdrawn": "Withdrawn",
 };
 
 const FIELD_LABELS: Record<string, string> = {
@@ -26,6 +27,9 @@ const FIELD_LABELS: Record<string, string> = {
   paidAt: "Paid",
   paymentReference: "Payment reference",
   decisionReleasedAt: "Released",
+  reason: "Reason",
+  refundCents: "Refund (cents)",
+  withdrawnBy: "Withdrawn by",
 };
 
 function show(key: string, value: unknown, timeZone: string): string {

@@ -4,6 +4,8 @@ import "server-only";
 import { and, asc, desc, eq, exists, ilike, inArray, isNotNull, isNull, ne, notInArray, or, sql, type SQL } from "drizzle-orm";
 import { db } from "@/db/client";
 import { writeAudit } from "@/db/queries/audit";
+import { settingsForShowId } from "@/db/queries/settings";
+import { chairMayWithdraw, refundIfWithdrawn } from "@/db/queries/withdrawals";
 import {
   auditLog,
   entrantProfiles,
@@ -187,9 +189,12 @@ export async function entryDetailForChair(viewer: Viewer, showSlug: string, entr
     showFacts(show.showId),
   ]);
   const { entry } = row;
+  const canWithdraw = chairMayWithdraw(show.status, entry.status);
+  const refund = canWithdraw && entry.paymentReference.startsWith("card ") ? await refundIfWithdrawn(db, entryId, (await settingsForShowId(show.showId)).withdrawalRefundPercent) : null;
   return {
     show: { slug: show.slug, name: show.name, timeZone: facts.timeZone, juried: facts.juried, currency: facts.currency },
     entry: { ...entry, paymentState: row.paymentState },
+    withdrawal: { allowed: canWithdraw, paidByCard: entry.paymentReference.startsWith("card "), refundCents: refund?.refundCents ?? 0 },
     entrant: { name: row.displayName || row.accountName, email: row.email, phone: row.phone ?? "", guild: row.guild ?? "" },
     rules: row.rulesVersion === null ? null : { version: row.rulesVersion, publishedAt: row.rulesPublishedAt, acceptedAt: entry.rulesAcceptedAt },
     photos,

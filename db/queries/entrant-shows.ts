@@ -6,7 +6,7 @@ import { db } from "@/db/client";
 import { entryFeesPaidCents, memberAt, scheduleOf } from "@/db/queries/payments";
 import { myResults } from "@/db/queries/published-results";
 import { settingsForShowId } from "@/db/queries/settings";
-import { refundIfWithdrawn } from "@/db/queries/withdrawals";
+import { entrantMayWithdraw, refundIfWithdrawn } from "@/db/queries/withdrawals";
 import { categories, entries, shows } from "@/db/schema";
 import type { Viewer } from "@/lib/session";
 
@@ -48,6 +48,7 @@ export async function myEntriesByShow(viewer: Viewer, now = new Date()) {
       categoryReasons: entries.categoryReasons,
       waitlistReason: entries.waitlistReason,
       showId: shows.id,
+      showStatus: shows.status,
       showSlug: shows.slug,
       showName: shows.name,
       guildName: shows.guildName,
@@ -74,7 +75,7 @@ export async function myEntriesByShow(viewer: Viewer, now = new Date()) {
       const s = list[0]!;
       const settings = await settingsForShowId(s.showId);
       const member = await memberAt(db, viewer.id, s.guildName);
-      const withdrawOpen = !s.entryClosesAt || now.getTime() < s.entryClosesAt.getTime();
+      const withdrawOpen = entrantMayWithdraw({ status: s.showStatus, entryClosesAt: s.entryClosesAt }, now);
       const shaped = await Promise.all(
         list.map(async (e) => {
           const paidByCard = e.paymentReference.startsWith("card ");

@@ -70,7 +70,7 @@ function ShowGroup({ group }: { group: MyShow }) {
         <p className="text-sm text-ink-muted">
           {group.withdrawOpen
             ? `Entries close ${closes}. Until then you can withdraw an entry here${group.refundPercent > 0 ? ` and get back ${group.refundPercent}% of its entry fee` : ""}.`
-            : `Entries closed ${closes}. To withdraw an entry now, contact the show.`}
+            : "Entries are closed; to withdraw an entry now, ask the show chair."}
         </p>
       ) : null}
       <ul className="grid gap-4 md:grid-cols-2">

@@ -1,16 +1,18 @@
-// Withdrawing an entry before entries close: status and time, the entry number kept, and the
-// refund (the show's percent of the entry fee, rounded down) made through the payments fake and
-// recorded on the card payment.
+// Withdrawing an entry: the entrant's own while the show takes entries (status and time, the
+// entry number kept, the refund of the show's percent of the entry fee, rounded down, made through
+// the payments fake and recorded on the card payment); after entries close only the chair's, with
+// a reason in the audit row and the same refund rule.
 import { eq } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
 import { startCheckoutAction, withdrawEntryAction } from "@/app/(entrant)/my/actions";
+import { withdrawEntryAsChairAction } from "@/app/(chair)/shows/[slug]/manage/entries/[entryId]/actions";
 import { POST } from "@/app/api/payments/webhook/route";
 import { db } from "@/db/client";
 import { myEntriesByShow } from "@/db/queries/entrant-shows";
 import { auditLog, entries, payments, showSettings, shows } from "@/db/schema";
 import { env } from "@/lib/env";
 import { stripe } from "@/lib/payments";
-import { makeEntry, makeShow, makeUser, type TestUser } from "../../helpers/factories";
+import { grantRole, makeEntry, makeShow, makeUser, type TestUser } from "../../helpers/factories";
 import { actAs } from "../../helpers/request-context";
 
 const FAKE = `http://127.0.0.1:${env.STRIPE_API_PORT}`;
@@ -103,9 +105,24 @@ describe("withdrawEntryAction", () => {
     const a = await makeEntry(show.id, entrant.id);
     actAs(entrant.cookie);
     const r = await withdrawEntryAction(null, { entryId: a.id });
-    // 06:00 UTC is midnight in America/Chicago (CST, UTC−6) on 1 March 2026.
-    expect(r).toMatchObject({ ok: false, status: 409, message: "Entries closed on Sun, Mar 1, 2026, 12:00 AM CST, so withdrawals can no longer be made here. Please contact the show." });
+    expect(r).toMatchObject({ ok: false, status: 409, message: "Entries are closed; ask the show chair to withdraw this quilt." });
     expect((await entryRow(a.id)).status).toBe("submitted");
+  });
+
+  it("refuses the entrant while the show is judging, even before the closing time, and changes nothing", async () => {
+    for (const status of ["entries_closed", "judging", "results_published"] as const) {
+      const show = await showWithFees(50);
+      const a = await makeEntry(show.id, entrant.id, { status: "accepted" });
+      await db.update(shows).set({ status }).where(eq(shows.id, show.id)); // closing time still 30 days ahead
+      actAs(entrant.cookie);
+      const r = await withdrawEntryAction(null, { entryId: a.id });
+      expect(r, status).toMatchObject({ ok: false, status: 409, message: "Entries are closed; ask the show chair to withdraw this quilt." });
+      expect((await entryRow(a.id)).status).toBe("accepted");
+      expect(await db.select().from(auditLog).where(eq(auditLog.subjectId, a.id))).toEqual([]);
+      const [group] = await myEntriesByShow({ id: entrant.id, name: entrant.name, email: entrant.email, isAdmin: false, roles: [] }).then((gs) => gs.filter((g) => g.show.id === show.id));
+      expect(group!.withdrawOpen).toBe(false);
+      expect(group!.entries.find((e) => e.id === a.id)!.canWithdraw).toBe(false);
+    }
   });
 
   it("answers 404 for someone else's entry and 400 for a malformed id", async () => {
@@ -116,6 +133,53 @@ describe("withdrawEntryAction", () => {
     expect(await withdrawEntryAction(null, { entryId: theirs.id })).toMatchObject({ ok: false, status: 404 });
     expect((await entryRow(theirs.id)).status).toBe("submitted");
     expect(await withdrawEntryAction(null, { entryId: "nope" })).toMatchObject({ ok: false, status: 400, fieldErrors: { entryId: [expect.any(String)] } });
+  });
+});
+
+describe("withdrawEntryAsChairAction", () => {
+  it("lets the chair withdraw a card-paid entry during judging, with the reason audited and the show's refund: 2500 × 50% = 1250", async () => {
+    const show = await showWithFees(50);
+    const chair = await makeUser({ name: "Chair Wren" });
+    await grantRole(chair.id, show.id, "chair");
+    const a = await makeEntry(show.id, entrant.id, { title: "Late Change" });
+    const paymentId = await payByCard(entrant, show.slug, [a.id]);
+    await db.update(entries).set({ status: "received" }).where(eq(entries.id, a.id)); // checked in at the desk
+    await db.update(shows).set({ status: "judging" }).where(eq(shows.id, show.id));
+
+    actAs(chair.cookie);
+    const missing = await withdrawEntryAsChairAction(null, { showSlug: show.slug, entryId: a.id, reason: "   " });
+    expect(missing).toMatchObject({ ok: false, status: 400, fieldErrors: { reason: [expect.any(String)] } });
+    expect((await entryRow(a.id)).status).toBe("received");
+
+    const r = await withdrawEntryAsChairAction(null, { showSlug: show.slug, entryId: a.id, reason: "  The entrant is unwell and asked for it back  " });
+    expect(r).toMatchObject({ ok: true, message: `Entry ${a.entryNumber} is withdrawn. A refund of $12.50 is on its way to the entrant's card.` });
+    const after = await entryRow(a.id);
+    expect([after.status, after.entryNumber]).toEqual(["withdrawn", a.entryNumber]);
+    expect(await paymentRow(paymentId)).toMatchObject({ refundedCents: 1250, status: "partially_refunded" });
+    const audit = await db.select().from(auditLog).where(eq(auditLog.subjectId, a.id));
+    expect(audit.filter((x) => x.action === "entry.withdrawn")).toEqual([
+      expect.objectContaining({
+        actorUserId: chair.id,
+        before: { status: "received" },
+        after: { status: "withdrawn", refundCents: 1250, withdrawnBy: "chair", reason: "The entrant is unwell and asked for it back" },
+      }),
+    ]);
+
+    expect(await withdrawEntryAsChairAction(null, { showSlug: show.slug, entryId: a.id, reason: "Again" })).toMatchObject({ ok: false, status: 409, message: "This entry is already withdrawn." });
+  });
+
+  it("refuses once results are out, and refuses an entry of another show as not found", async () => {
+    const show = await showWithFees(50);
+    const chair = await makeUser();
+    await grantRole(chair.id, show.id, "chair");
+    const a = await makeEntry(show.id, entrant.id, { status: "judged" });
+    const elsewhere = await makeEntry((await makeShow()).id, entrant.id);
+    await db.update(shows).set({ status: "results_published" }).where(eq(shows.id, show.id));
+    actAs(chair.cookie);
+    expect(await withdrawEntryAsChairAction(null, { showSlug: show.slug, entryId: a.id, reason: "Asked" })).toMatchObject({ ok: false, status: 409, message: "The results are out, so entries can no longer be withdrawn." });
+    expect(await withdrawEntryAsChairAction(null, { showSlug: show.slug, entryId: elsewhere.id, reason: "Asked" })).toMatchObject({ ok: false, status: 404 });
+    expect((await entryRow(a.id)).status).toBe("judged");
+    expect((await entryRow(elsewhere.id)).status).toBe("submitted");
   });
 });
 

@@ -1,4 +1,5 @@
-// Access rows for the chair's entries table, its spreadsheet and its bulk actions.
+// Access rows for the chair's entries table, its spreadsheet, its bulk actions and the withdrawal
+// on one entry's page.
 import { db } from "@/db/client";
 import { showSettings } from "@/db/schema";
 import { grantRole, makeEntry, makeShow } from "../../../helpers/factories";
@@ -25,6 +26,11 @@ export const actions: Record<string, Case> = {
   "(chair)/shows/[slug]/manage/entries#markPaidOfflineAction": {
     expect: only({ chair: 200 }),
     input: async (w) => ({ showSlug: w.show.slug, entryIds: [await fresh(w)], reference: "cash" }),
+  },
+  // The chair withdraws with a reason; a fresh entry per call, so each caller meets one to withdraw.
+  "(chair)/shows/[slug]/manage/entries/[entryId]#withdrawEntryAsChairAction": {
+    expect: only({ chair: 200 }),
+    input: async (w) => ({ showSlug: w.show.slug, entryId: await fresh(w), reason: "The entrant asked by phone" }),
   },
   // Releasing needs a juried show: one of its own per call, with the same team as the table's show.
   "(chair)/shows/[slug]/manage/entries#releaseDecisionsAction": {

@@ -4,6 +4,7 @@ import type { Metadata } from "next";
 import { ArrowLeft, ImageOff } from "lucide-react";
 import { EntryFactList } from "@/components/chair-entries/entry-facts";
 import { EntryHistory } from "@/components/chair-entries/entry-history";
+import { WithdrawEntry } from "@/components/chair-entries/withdraw-entry";
 import { EntryStatusBadge } from "@/components/entries/entry-status";
 import { formatDateTime } from "@/components/format/dates";
 import { guardQuery, pageViewer } from "@/components/shell/guard";
@@ -97,6 +98,12 @@ export default async function ChairEntryPage({ params }: Props) {
               <p className="text-ink-muted">No rules version is recorded for this entry.</p>
             )}
           </Card>
+          {d.withdrawal.allowed ? (
+            <Card aria-labelledby="withdraw">
+              <CardHeader id="withdraw" title="Withdraw" description="Takes the quilt out of the show, at the entrant's request or the committee's decision." />
+              <WithdrawEntry showSlug={show.slug} entryId={entry.id} currency={show.currency} paidByCard={d.withdrawal.paidByCard} paid={entry.paidAt !== null} refundCents={d.withdrawal.refundCents} />
+            </Card>
+          ) : null}
         </div>
       </div>
 
