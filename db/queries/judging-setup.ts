@@ -6,6 +6,7 @@ import { and, asc, eq, inArray, notInArray, sql } from "drizzle-orm";
 import { db, type Tx } from "@/db/client";
 import { categories, entries, judgeDeclarations, judgeSheets, judgingPanels, panelCategories, panelMembers, scoreSheets, showRoles, showSettings, shows, user } from "@/db/schema";
 import { writeAudit } from "@/db/queries/audit";
+import { conflictsForChair, JUDGED_OUT, judgeConflicts, recordConflicts } from "@/db/queries/judge-conflicts";
 import { settingsForShowId } from "@/db/queries/settings";
 import { badInput, conflict, forbiddenError, notFound } from "@/lib/errors";
 import type { z } from "zod";
@@ -14,51 +15,14 @@ import { hasShowRole, requireShowRole, type Viewer } from "@/lib/session";
 import { checkSheet } from "@/scoring/score-sheets";
 import { reopenSheet } from "@/scoring/sheet-sync";
 
-/** Entries that take part in judging: sent, judged, not withdrawn or declined. */
-export const JUDGED_OUT = ["draft", "withdrawn", "declined"] as const;
-
-const fold = (s: string) => s.normalize("NFD").replace(/[\u0300-\u036f]/g, "").toLowerCase().replace(/\s+/g, " ").trim();
-
-// ---- Conflicts -----------------------------------------------------------------------------------
-
-/**
- * Why these judges may not judge these categories: an entry of their own there, or of a person
- * they declared (matched by the entrant's account e-mail, or by a maker's or quilter's name).
- */
-export async function judgeConflicts(reader: Pick<Tx, "select">, showId: string, judgeIds: readonly string[], categoryIds: readonly string[]): Promise<string[]> {
-  if (!judgeIds.length || !categoryIds.length) return [];
-  const [judges, declared, rows] = await Promise.all([
-    reader.select({ id: user.id, name: user.name, email: user.email }).from(user).where(inArray(user.id, [...judgeIds])),
-    reader.select().from(judgeDeclarations).where(and(eq(judgeDeclarations.showId, showId), inArray(judgeDeclarations.judgeUserId, [...judgeIds]))),
-    reader
-      .select({ entrantUserId: entries.entrantUserId, entrantEmail: user.email, madeBy: entries.madeBy, quiltedBy: entries.quiltedBy, code: categories.code, name: categories.name })
-      .from(entries)
-      .innerJoin(categories, eq(categories.id, entries.categoryId))
-      .innerJoin(user, eq(user.id, entries.entrantUserId))
-      .where(and(eq(entries.showId, showId), inArray(entries.categoryId, [...categoryIds]), notInArray(entries.status, [...JUDGED_OUT]))),
-  ]);
-  const reasons = new Set<string>();
-  for (const j of judges) {
-    const mine = declared.filter((d) => d.judgeUserId === j.id);
-    for (const r of rows) {
-      const where = `${r.code} ${r.name}`;
-      const people = [...r.madeBy, r.quiltedBy].map(fold).filter(Boolean);
-      if (r.entrantUserId === j.id || people.includes(fold(j.name))) reasons.add(`${j.name} has an entry in ${where}, so can't judge it.`);
-      for (const d of mine) {
-        const byEmail = d.personEmail && fold(d.personEmail) === fold(r.entrantEmail);
-        const byName = d.personName && people.includes(fold(d.personName));
-        if (byEmail || byName) reasons.add(`${j.name} declared ${d.personName || d.personEmail} (${d.relation}), who has an entry in ${where}.`);
-      }
-    }
-  }
-  return [...reasons];
-}
+// Conflicts live in ./judge-conflicts.ts; these names stay importable from here.
+export { JUDGED_OUT, judgeConflicts } from "@/db/queries/judge-conflicts";
 
 // ---- Reading -----------------------------------------------------------------------------------
 
 export async function judgingSetup(viewer: Viewer, slug: string) {
   const { showId, name } = await requireShowRole(viewer, slug, ["chair"]);
-  const [sheets, cats, panels, members, panelCats, declarations, staff, settings] = await Promise.all([
+  const [sheets, cats, panels, members, panelCats, declarations, staff, settings, conflicts] = await Promise.all([
     db.select().from(scoreSheets).where(eq(scoreSheets.showId, showId)).orderBy(asc(scoreSheets.name)),
     db
       .select({ id: categories.id, code: categories.code, name: categories.name, method: categories.judgingMethod, scoreSheetId: categories.scoreSheetId, mergedIntoId: categories.mergedIntoId, precedence: categories.precedence })
@@ -71,6 +35,7 @@ export async function judgingSetup(viewer: Viewer, slug: string) {
     db.select().from(judgeDeclarations).where(eq(judgeDeclarations.showId, showId)).orderBy(asc(judgeDeclarations.createdAt)),
     db.select({ userId: showRoles.userId, role: showRoles.role, name: user.name, email: user.email }).from(showRoles).innerJoin(user, eq(user.id, showRoles.userId)).where(and(eq(showRoles.showId, showId), inArray(showRoles.role, ["judge", "scribe"]))).orderBy(asc(user.name)),
     settingsForShowId(showId),
+    conflictsForChair(db, showId),
   ]);
   return {
     show: { slug, name },
@@ -85,6 +50,7 @@ export async function judgingSetup(viewer: Viewer, slug: string) {
     judges: staff.filter((s) => s.role === "judge"),
     scribes: staff.filter((s) => s.role === "scribe"),
     declarations,
+    conflicts,
     options: { commentPolicy: settings.commentPolicy, quickPhrases: settings.quickPhrases, judgeFields: settings.judgeFields },
   };
 }
@@ -178,24 +144,25 @@ export async function deletePanel(viewer: Viewer, slug: string, input: z.output<
 }
 
 /**
- * A judge declares someone they must not judge (the chair may record it for them). Refused when
- * the judge already sits on a panel with a category holding that person's entry.
+ * A judge declares someone they must not judge (the chair may record it for them). The answer is
+ * the same whether or not the person has an entry: a match is kept as a conflict for the chair
+ * (./judge-conflicts.ts), never told to the judge, so a declaration can't be used to ask who
+ * entered. Once judging has started only the chair records declarations, because a refused mark
+ * would then tell the judge which entry matched.
  */
 export async function addDeclaration(viewer: Viewer, slug: string, input: z.output<typeof declarationSchema>) {
   const show = await requireShowRole(viewer, slug, ["chair", "judge"]);
   const judgeUserId = input.judgeUserId ?? viewer.id;
-  if (judgeUserId !== viewer.id && !hasShowRole(viewer, show.showId, ["chair"])) throw forbiddenError("Only the chair can record a declaration for another judge.");
+  const isChair = hasShowRole(viewer, show.showId, ["chair"]);
+  if (judgeUserId !== viewer.id && !isChair) throw forbiddenError("Only the chair can record a declaration for another judge.");
+  if (!isChair && show.status !== "draft" && show.status !== "entries_open" && show.status !== "entries_closed") {
+    throw conflict("Judging has started at this show; tell the chair, who records declarations from now on.");
+  }
   return db.transaction(async (tx) => {
     await assertStaff(tx, show.showId, [judgeUserId], "judge");
     const [row] = await tx.insert(judgeDeclarations).values({ showId: show.showId, judgeUserId, personName: input.personName, personEmail: input.personEmail.toLowerCase(), relation: input.relation }).returning();
-    const assigned = await tx
-      .select({ categoryId: panelCategories.categoryId })
-      .from(panelCategories)
-      .innerJoin(panelMembers, and(eq(panelMembers.panelId, panelCategories.panelId), eq(panelMembers.userId, judgeUserId), eq(panelMembers.role, "judge")));
-    const reasons = await judgeConflicts(tx, show.showId, [judgeUserId], assigned.map((a) => a.categoryId));
-    const hits = reasons.filter((r) => r.includes("declared"));
-    if (hits.length) throw conflict(`${hits.join(" ")} Ask the chair to change the panel first.`);
     await writeAudit(tx, { actorUserId: viewer.id, showId: show.showId, action: "judge.declared", subjectType: "judge_declaration", subjectId: row!.id, after: { judgeUserId, personName: input.personName, personEmail: input.personEmail, relation: input.relation } });
+    await recordConflicts(tx, show.showId, { judgeIds: [judgeUserId] }, "declaration", viewer.id);
     return { id: row!.id };
   });
 }

@@ -3,7 +3,7 @@
 // and declarations never change the shared show other rows rely on. A judge may record and remove
 // their own declarations; everything else is the chair's alone.
 import { db } from "@/db/client";
-import { judgeDeclarations, judgeSheets, judgingPanels } from "@/db/schema";
+import { judgeDeclarations, judgeSheets, judgingPanels, panelCategories, panelMembers } from "@/db/schema";
 import { grantRole, makeCategory, makeEntry, makeShow } from "../../../helpers/factories";
 import { only, type Case, type World } from "../table";
 
@@ -65,6 +65,19 @@ export const actions: Record<string, Case> = {
       const show = await ownShow(w);
       const [row] = await db.insert(judgeDeclarations).values({ showId: show.id, judgeUserId: w.users.judge.id, personName: "Hollis Fernbrook", relation: "client" }).returning({ id: judgeDeclarations.id });
       return { showSlug: show.slug, declarationId: row!.id };
+    },
+  },
+  // The judge's own entry in a category of their panel: an open conflict only the chair decides.
+  [`${base}#resolveConflictAction`]: {
+    expect: only({ chair: 200 }),
+    input: async (w) => {
+      const show = await ownShow(w);
+      const category = await makeCategory(show.id);
+      const entry = await makeEntry(show.id, w.users.judge.id, { categoryId: category.id, categoryState: "decided" });
+      const [panel] = await db.insert(judgingPanels).values({ showId: show.id, name: "Conflict panel" }).returning({ id: judgingPanels.id });
+      await db.insert(panelMembers).values({ panelId: panel!.id, userId: w.users.judge.id, role: "judge" });
+      await db.insert(panelCategories).values({ panelId: panel!.id, categoryId: category.id });
+      return { showSlug: show.slug, judgeUserId: w.users.judge.id, entryId: entry.id, action: "allow", reason: "The chair has checked it." };
     },
   },
   [`${base}#saveJudgingOptionsAction`]: {

@@ -1,9 +1,10 @@
 "use server";
 // The chair's judging set-up actions: score sheets, each category's method and sheet, panels,
-// declarations, options, reopening a submitted sheet and reading a sheet's history. Each query
+// declarations, judges' conflicts, options, reopening a submitted sheet and reading a sheet's history. Each query
 // checks the chair role itself (addDeclaration and removeDeclaration also let a judge act for themselves).
 import { revalidatePath } from "next/cache";
 import { z } from "zod";
+import { resolveConflict } from "@/db/queries/judge-conflicts";
 import { sheetHistory } from "@/db/queries/judging";
 import { addDeclaration, deletePanel, removeDeclaration, reopenJudgeSheet, saveJudgingOptions, savePanel, saveScoreSheet, setCategoryJudging } from "@/db/queries/judging-setup";
 import { defineAction } from "@/lib/action";
@@ -17,6 +18,7 @@ import {
   reopenSchema,
   saveSheetSchema,
 } from "@/lib/schemas/judging";
+import { resolveConflictSchema } from "@/lib/schemas/judge-conflicts";
 
 const showSlug = z.string().min(1, "The show is missing.");
 const withSlug = <S extends z.ZodType>(schema: S) => z.intersection(schema, z.object({ showSlug }));
@@ -64,6 +66,13 @@ export const removeDeclarationAction = defineAction(withSlug(deleteDeclarationSc
   await removeDeclaration(viewer, input.showSlug, { declarationId: input.declarationId });
   refresh(input.showSlug);
   return { message: "Declaration removed." };
+});
+
+export const resolveConflictAction = defineAction(withSlug(resolveConflictSchema), async (input, viewer) => {
+  const { showSlug: slug, ...decision } = input;
+  const { panelsLeft } = await resolveConflict(viewer, slug, decision);
+  refresh(slug);
+  return { message: decision.action === "move" ? `The judge is off ${panelsLeft.join(", ") || "that panel"}.` : "Recorded: the judge may judge this entry." };
 });
 
 export const saveJudgingOptionsAction = defineAction(withSlug(judgingOptionsSchema), async (input, viewer) => {

@@ -1,10 +1,11 @@
 // The chair's judging set-up: score sheets, each category's method and sheet, panels, the people
-// judges must not judge, and the judging options. Each part saves on its own.
+// judges must not judge, judges' conflicts with entries, and the judging options. Each part saves on its own.
 import { SectionLinks } from "@/components/ui/section-links";
 import type { Metadata } from "next";
 import Link from "next/link";
 import { Activity, ArrowLeft } from "lucide-react";
 import { CategoryMethods } from "@/components/judging-setup/category-methods";
+import { ConflictsSection } from "@/components/judging-setup/conflicts-section";
 import { DeclarationsSection } from "@/components/judging-setup/declarations-section";
 import { JudgingOptionsForm } from "@/components/judging-setup/options-form";
 import { PanelsSection } from "@/components/judging-setup/panels-section";
@@ -25,6 +26,7 @@ const SECTIONS = [
   ["methods", "Categories"],
   ["panels", "Panels"],
   ["declarations", "Declarations"],
+  ["conflicts", "Conflicts"],
   ["judging-options", "Options"],
 ] as const;
 
@@ -78,6 +80,11 @@ export default async function JudgingSetupPage({ params }: Props) {
       <Card aria-labelledby="declarations">
         <CardHeader id="declarations" title="Declarations" description="People a judge must not judge. Matched against entrants’ e-mail addresses and makers’ and quilters’ names." />
         <DeclarationsSection showSlug={slug} judges={setup.judges} declarations={setup.declarations} />
+      </Card>
+
+      <Card aria-labelledby="conflicts">
+        <CardHeader id="conflicts" title="Conflicts" description="A judge’s own entry, or a declared person’s, in a category they judge. Found whenever a declaration, an entry or a category changes; judges are never told. Judging can’t start while one is open." />
+        <ConflictsSection showSlug={slug} open={setup.conflicts.open} decided={setup.conflicts.decided} />
       </Card>
 
       <Card aria-labelledby="judging-options">
