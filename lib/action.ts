@@ -6,7 +6,7 @@ import type { z } from "zod";
 import { AppError, type FieldErrors } from "@/lib/errors";
 import { errorSummary } from "@/lib/error-log";
 import { getViewer, type Viewer } from "@/lib/session";
-import { fieldErrorsOf, formDataToObject } from "@/lib/validation";
+import { fieldErrorsOf, findUnstorable, formDataToObject } from "@/lib/validation";
 
 export type ActionResult<T = undefined> =
   | { ok: true; message?: string; data?: T }
@@ -39,6 +39,12 @@ export function defineAction<S extends z.ZodType, T = undefined>(schema: S, hand
     try {
       const viewer = await getViewer();
       if (!viewer) return { ok: false, status: 401, message: "Please sign in first.", values: safeValues };
+      // The last line of defence: whatever a schema forgot, no string PostgreSQL can't store (NUL,
+      // half a surrogate pair) and no hostile nesting gets past here.
+      const unstorable = findUnstorable(values);
+      if (unstorable) {
+        return { ok: false, status: 400, message: "Some fields need attention.", fieldErrors: { [unstorable.path]: [unstorable.message] }, values: safeValues };
+      }
       const parsed = schema.safeParse(values);
       if (!parsed.success) {
         return {

@@ -8,7 +8,7 @@ import { categories, entries, judgeDeclarations, judgeSheets, judgingPanels, pan
 import { writeAudit } from "@/db/queries/audit";
 import { conflictsForChair, JUDGED_OUT, judgeConflicts, recordConflicts } from "@/db/queries/judge-conflicts";
 import { settingsForShowId } from "@/db/queries/settings";
-import { badInput, conflict, forbiddenError, notFound } from "@/lib/errors";
+import { badInput, conflict, conflictOnUnique, forbiddenError, isUniqueViolation, notFound } from "@/lib/errors";
 import type { z } from "zod";
 import type { categoryJudgingSchema, declarationSchema, deleteDeclarationSchema, deletePanelSchema, judgingOptionsSchema, panelSchema, reopenSchema, saveSheetSchema } from "@/lib/schemas/judging";
 import { hasShowRole, requireShowRole, type Viewer } from "@/lib/session";
@@ -76,6 +76,10 @@ export async function saveScoreSheet(viewer: Viewer, slug: string, input: z.outp
       : await tx.insert(scoreSheets).values(values).returning();
     await writeAudit(tx, { actorUserId: viewer.id, showId, action: existing ? "score_sheet.updated" : "score_sheet.created", subjectType: "score_sheet", subjectId: row!.id, before: existing ? { name: existing.name, sheet: existing.sheet } : null, after: { name: input.name, sheet: input.sheet, isDefault } });
     return { id: row!.id, nominalMax: check.nominalMax, notes: check.notes };
+  }).catch((err: unknown) => {
+    // Two saves at the same moment both pass the name check above; the unique indexes decide.
+    if (isUniqueViolation(err, "score_sheets_show_name")) throw conflict(`There is already a sheet called “${input.name}”.`, { name: ["Choose another name."] });
+    throw conflictOnUnique(err, "The score sheets changed at the same moment; try again.");
   });
 }
 

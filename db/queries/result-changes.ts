@@ -8,7 +8,7 @@ import { awardPicks, categories, entries, panelMembers, judgingPanels, placement
 import { writeAudit } from "@/db/queries/audit";
 import { lockShow } from "@/db/queries/settings";
 import { assertResultsOpen, resultRulesFor } from "@/db/queries/results";
-import { badInput, conflict, notFound } from "@/lib/errors";
+import { badInput, conflict, conflictOnUnique, notFound } from "@/lib/errors";
 import type { AwardInput, PlacementInput, ResultRulesInput } from "@/lib/schemas/results";
 import { requireShowRole, type Viewer } from "@/lib/session";
 
@@ -102,8 +102,7 @@ export async function saveAward(viewer: Viewer, slug: string, input: AwardInput)
         id = row!.id;
       }
     } catch (err) {
-      if ((err as { code?: string }).code === "23505") throw badInput(`There is already an award called “${input.name}”.`, { name: ["Choose another name."] });
-      throw err;
+      throw conflictOnUnique(err, `There is already an award called “${input.name}”.`, { name: ["Choose another name."] });
     }
     for (const o of others.filter((o) => o.id !== id)) {
       const wants = input.combinesWith.includes(o.id);

@@ -2,6 +2,7 @@
 // and the intake desk's re-measure. A category is a rule of conditions (scoring/categories.ts);
 // these check every part with a message that names it, so a bad rule is refused, not half saved.
 import { z } from "zod";
+import { storableString } from "@/lib/validation";
 import type { Condition } from "@/scoring/categories";
 
 const MEASURES = ["width", "length", "perimeter", "area", "longestSide", "shortestSide"] as const;
@@ -10,7 +11,7 @@ const UNITS = ["in", "cm", "sq in", "sq cm"] as const;
 
 /** A bound's number as typed ("60", "60.5", "152,4") or sent (60.5): positive, finite, not absurd. */
 const boundValue = z
-  .union([z.number(), z.string()])
+  .union([z.number(), storableString()])
   .transform((v, ctx) => {
     const s = typeof v === "number" ? String(v) : v.trim().replace(/,(?=\d{1,2}$)/, ".").replace(/,/g, "");
     const n = Number(s);
@@ -41,7 +42,7 @@ const sizeCondition = z
     });
   });
 
-const techniqueName = z.string().trim().min(1).max(60);
+const techniqueName = storableString().trim().min(1).max(60);
 
 export const conditionSchema = z.discriminatedUnion("kind", [
   sizeCondition,
@@ -65,7 +66,7 @@ export const conditionSchema = z.discriminatedUnion("kind", [
 
 const uuid = z.uuid("That category id isn't valid.");
 const optionalCap = z
-  .union([z.number(), z.string(), z.null()])
+  .union([z.number(), storableString(), z.null()])
   .optional()
   .transform((v, ctx) => {
     if (v === null || v === undefined || (typeof v === "string" && v.trim() === "")) return null;
@@ -79,9 +80,9 @@ const optionalCap = z
 
 export const categorySchema = z.object({
   id: uuid,
-  code: z.string().trim().min(1, "Give the category a code, e.g. 10 or A1.").max(12, "Keep the code to 12 characters.").regex(/^[\p{L}\p{N}][\p{L}\p{N}.\-]*$/u, "Use letters, digits, dots and dashes in the code."),
-  name: z.string().trim().min(1, "Give the category a name.").max(80, "Keep the name to 80 characters."),
-  description: z.string().trim().max(600, "Keep the description to 600 characters.").default(""),
+  code: storableString().trim().min(1, "Give the category a code, e.g. 10 or A1.").max(12, "Keep the code to 12 characters.").regex(/^[\p{L}\p{N}][\p{L}\p{N}.\-]*$/u, "Use letters, digits, dots and dashes in the code."),
+  name: storableString().trim().min(1, "Give the category a name.").max(80, "Keep the name to 80 characters."),
+  description: storableString().trim().max(600, "Keep the description to 600 characters.").default(""),
   precedence: z.number().int().min(0).max(100_000),
   conditions: z.array(conditionSchema).max(20, "That is more conditions than one category needs."),
   cap: optionalCap,
@@ -95,9 +96,9 @@ export const categorySetSchema = z
     categories: z.array(categorySchema).max(200, "A show can have up to 200 categories."),
     overlap: z.enum(["flag", "firstByPrecedence"]),
     /** The fingerprint of the moves the chair saw; absent on the first try. */
-    confirmMoves: z.string().max(40).optional(),
+    confirmMoves: storableString().max(40).optional(),
     /** Why, for the audit log (e.g. "merged the two small art categories"). */
-    note: z.string().trim().max(300).default(""),
+    note: storableString().trim().max(300).default(""),
   })
   .superRefine((s, ctx) => {
     const seenCode = new Map<string, number>();
@@ -121,13 +122,13 @@ export const overrideSchema = z.object({
   entryId: uuid,
   /** A category id, or "rules" to hand the entry back to the rules. */
   categoryId: z.union([uuid, z.literal("rules")]),
-  reason: z.string().trim().min(3, "Say why, in a few words (it goes in the audit log).").max(300, "Keep the reason to 300 characters."),
+  reason: storableString().trim().min(3, "Say why, in a few words (it goes in the audit log).").max(300, "Keep the reason to 300 characters."),
 });
 
 export const measureSchema = z.object({
   entryId: uuid,
-  width: z.string().trim().min(1, "Enter the measured width.").max(20),
-  length: z.string().trim().min(1, "Enter the measured length.").max(20),
+  width: storableString().trim().min(1, "Enter the measured width.").max(20),
+  length: storableString().trim().min(1, "Enter the measured length.").max(20),
   unit: z.enum(["in", "cm"]),
 });
 
@@ -135,10 +136,10 @@ export const reviewSizeSchema = z.object({ entryId: uuid });
 
 export const admitSchema = z.object({
   entryId: uuid,
-  reason: z.string().trim().min(3, "Say why, in a few words (it goes in the audit log).").max(300),
+  reason: storableString().trim().min(3, "Say why, in a few words (it goes in the audit log).").max(300),
 });
 
 export const toleranceSchema = z.object({
-  tolerance: z.string().trim().min(1, "Enter the tolerance, e.g. 1 or 0.5."),
+  tolerance: storableString().trim().min(1, "Enter the tolerance, e.g. 1 or 0.5."),
   unit: z.enum(["in", "cm"]),
 });

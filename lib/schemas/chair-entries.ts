@@ -1,6 +1,7 @@
 // Input schemas for the chair's entries table and its bulk actions, shared by the client island,
 // the route handler and the server actions.
 import { z } from "zod";
+import { storableString } from "@/lib/validation";
 
 /** Statuses a chair sees in the table; drafts are the entrant's own unfinished work. */
 export const CHAIR_STATUSES = ["submitted", "paid", "accepted", "declined", "received", "judged", "hung", "returned", "withdrawn"] as const;
@@ -17,7 +18,7 @@ const anyOf = <T extends readonly [string, ...string[]]>(values: T, message: str
   z.preprocess((v) => (v === "" ? undefined : v), z.enum(values, message).optional());
 
 export const entriesListSchema = z.object({
-  q: z.string().trim().max(200, "Search at most 200 characters.").default(""),
+  q: storableString().trim().max(200, "Search at most 200 characters.").default(""),
   status: anyOf(CHAIR_STATUSES, "Choose a status from the list."),
   payment: anyOf(PAYMENT_STATES, "Choose paid, unpaid or refunded."),
   division: anyOf(DIVISIONS, "Choose a division from the list."),
@@ -36,18 +37,18 @@ const entryIds = z.preprocess(
   (v) => (typeof v === "string" ? v.split(",").filter(Boolean) : v),
   z.array(z.uuid("An entry id is not valid."), "Choose at least one entry.").min(1, "Choose at least one entry.").max(1000, "Choose at most 1,000 entries at once."),
 );
-const showSlug = z.string().min(1, "The show is missing.");
+const showSlug = storableString().min(1, "The show is missing.").max(120);
 
 export const acceptEntriesSchema = z.object({ showSlug, entryIds });
 export const declineEntriesSchema = z.object({
   showSlug,
   entryIds,
-  reason: z.string("Give a reason for declining.").trim().min(1, "Give a reason for declining; the entrant reads it.").max(1000, "Keep the reason under 1,000 characters."),
+  reason: storableString("Give a reason for declining.").trim().min(1, "Give a reason for declining; the entrant reads it.").max(1000, "Keep the reason under 1,000 characters."),
 });
 export const markPaidOfflineSchema = z.object({
   showSlug,
   entryIds,
-  reference: z.string("Give the cash or cheque reference.").trim().min(1, "Give the cash or cheque reference, e.g. “cheque 1042”.").max(200, "Keep the reference under 200 characters."),
+  reference: storableString("Give the cash or cheque reference.").trim().min(1, "Give the cash or cheque reference, e.g. “cheque 1042”.").max(200, "Keep the reference under 200 characters."),
 });
 export const releaseDecisionsSchema = z.object({ showSlug });
 

@@ -3,11 +3,12 @@
 // and dollars as text) so a parsed value parses again; the conversions below turn them into µm
 // and cents for the database.
 import { z } from "zod";
+import { INT4_MAX, storableString } from "@/lib/validation";
 import { countWords } from "@/scoring/entry-completeness";
 import { parseLength, type LengthUnit } from "@/scoring/measure";
 
 const id = z.uuid("This entry link is not valid.");
-const text = (max: number, label: string) => z.string().trim().max(max, `Keep ${label} under ${max} characters.`);
+const text = (max: number, label: string) => storableString().trim().max(max, `Keep ${label} under ${max} characters.`);
 
 // ---- Step 1: the quilt -------------------------------------------------------------------------
 
@@ -15,12 +16,12 @@ export const quiltStepSchema = z
   .object({
     title: text(120, "the title").min(1, "Give the quilt's title."),
     sizeUnit: z.enum(["in", "cm"], "Choose inches or centimetres."),
-    width: z.string().trim().max(40),
-    length: z.string().trim().max(40),
+    width: storableString().trim().max(40),
+    length: storableString().trim().max(40),
     // A lone checkbox (a show listing one technique) or a FormData post gives a string or false.
     techniques: z.preprocess(
       (v) => (typeof v === "string" ? [v] : v === false || v === undefined || v === null ? [] : v),
-      z.array(z.string().trim().min(1).max(60)).max(20).min(1, "Tick at least one technique."),
+      z.array(storableString().trim().min(1).max(60)).max(20).min(1, "Tick at least one technique."),
     ),
   })
   .superRefine((v, ctx) => {
@@ -106,13 +107,13 @@ const money = (label: string, required: boolean) =>
 
 export const aboutStepSchema = z
   .object({
-    statement: z.string().trim().max(5000, "Keep the statement under 5,000 characters.").min(1, "Write a short artist statement."),
+    statement: storableString().trim().max(5000, "Keep the statement under 5,000 characters.").min(1, "Write a short artist statement."),
     declaredValue: money("the declared value", true),
     forSale: z.boolean(),
     price: money("the price", false),
     judged: z.enum(["judged", "display"], "Choose judged or display only."),
     division: z.enum(["open", "youth", "first_time"], "Choose a division."),
-    youthAge: z.string().trim().max(3),
+    youthAge: storableString().trim().max(3),
   })
   .superRefine((v, ctx) => {
     if (v.division === "youth") {
@@ -157,9 +158,9 @@ export const PHOTO_CONTENT_TYPES = ["image/jpeg", "image/png", "image/webp", "im
 export const presignPhotoSchema = z.object({
   view: z.enum(PHOTO_VIEWS, "Choose which view this photo is."),
   contentType: z.enum(PHOTO_CONTENT_TYPES, "Upload a JPEG, PNG, WebP or HEIC photo."),
-  bytes: z.number().int().positive("The file is empty."),
+  bytes: z.number().int().positive("The file is empty.").max(INT4_MAX, "That file is too large."),
 });
-export const attachPhotoSchema = z.object({ uploadKey: z.string().min(1).max(300) });
+export const attachPhotoSchema = z.object({ uploadKey: storableString().min(1).max(300) });
 export const PHOTO_SIZES = ["thumb", "web", "original"] as const;
 export type PhotoSize = (typeof PHOTO_SIZES)[number];
 

@@ -1,10 +1,11 @@
 // The entrant profile form's schema, shared by the form and the action.
 import { z } from "zod";
+import { storableString } from "@/lib/validation";
 
-const text = (max: number) => z.string().trim().max(max, `Keep this under ${max} characters.`).default("");
+const text = (max: number) => storableString().trim().max(max, `Keep this under ${max} characters.`).default("");
 
 export const profileSchema = z.object({
-  displayName: z.string().trim().min(2, "Enter the name you want on your entries.").max(80),
+  displayName: storableString().trim().min(2, "Enter the name you want on your entries.").max(80),
   phone: z
     .string()
     .trim()

@@ -1,14 +1,15 @@
 // Input schemas for results: the show's result rules and ribbons, the chair's changes to proposed
 // placements and tie orders (always with a reason), show-wide awards and their picks, publishing.
 import { z } from "zod";
+import { storableString } from "@/lib/validation";
 
-const reason = z.string().trim().min(3, "Give a reason (a few words) — it goes in the audit log.").max(500, "Keep the reason under 500 characters.");
-const colour = z.string().regex(/^#[0-9a-fA-F]{6}$/, "Pick a colour.");
-export const ribbonSchema = z.object({ name: z.string().trim().min(1, "Name the ribbon, e.g. Blue.").max(40), colour });
+const reason = storableString().trim().min(3, "Give a reason (a few words) — it goes in the audit log.").max(500, "Keep the reason under 500 characters.");
+const colour = storableString().regex(/^#[0-9a-fA-F]{6}$/, "Pick a colour.");
+export const ribbonSchema = z.object({ name: storableString().trim().min(1, "Name the ribbon, e.g. Blue.").max(40), colour });
 const score = z.number({ error: "A minimum must be a number." }).min(0, "A minimum can't be negative.").max(1000, "That minimum is too high.");
 
 export const tieBreakRuleSchema = z.discriminatedUnion("kind", [
-  z.object({ kind: z.literal("section"), sectionId: z.string().min(1).max(40), label: z.string().trim().min(1).max(80) }),
+  z.object({ kind: z.literal("section"), sectionId: storableString().min(1).max(40), label: storableString().trim().min(1).max(80) }),
   z.object({ kind: z.literal("firstPlaceVotes") }),
   z.object({ kind: z.literal("median") }),
   z.object({ kind: z.literal("chair") }),
@@ -56,9 +57,9 @@ const AWARD_KINDS = ["best_of_show", "best_hand_quilting", "best_home_machine", 
 export const awardSchema = z
   .object({
     id: z.uuid().optional(),
-    name: z.string().trim().min(1, "Name the award.").max(80),
+    name: storableString().trim().min(1, "Name the award.").max(80),
     kind: z.enum(AWARD_KINDS, "Choose the kind of award."),
-    sponsor: z.string().trim().max(120).default(""),
+    sponsor: storableString().trim().max(120).default(""),
     chooseBy: z.enum(["chair", "judges_vote"]),
     ribbon: ribbonSchema,
     eligibility: z.object({
@@ -82,9 +83,9 @@ export const pickSchema = z.object({
   awardId: z.uuid(),
   entryId: z.uuid("Choose an entry."),
   /** The judge voting or choosing; empty for the chair's own choice. */
-  judgeUserId: z.string().max(100).default(""),
-  reason: z.string().trim().max(500).default(""),
+  judgeUserId: storableString().max(100).default(""),
+  reason: storableString().trim().max(500).default(""),
 });
 export const removePickSchema = z.object({ pickId: z.uuid(), reason });
-export const publishSchema = z.object({ reason: z.string().trim().max(500).default("") });
+export const publishSchema = z.object({ reason: storableString().trim().max(500).default("") });
 export const unpublishSchema = z.object({ reason });

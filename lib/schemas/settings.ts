@@ -2,6 +2,7 @@
 // actions and the route handler. Forms send what was typed (strings); these turn it into cents,
 // counts and instants' wall-clock text, with a message naming the field when it can't.
 import { z } from "zod";
+import { storableString } from "@/lib/validation";
 
 // ── Money: "25", "25.00", "$25", "1,250.50" → integer cents, by integer arithmetic only ─────────
 
@@ -37,7 +38,7 @@ export function centsToInput(cents: number | null | undefined): string {
   return `${Math.trunc(cents / 100)}.${String(cents % 100).padStart(2, "0")}`;
 }
 
-const text = z.union([z.string(), z.number()]).transform((v) => String(v));
+const text = z.union([storableString(), z.number()]).transform((v) => String(v));
 
 /** A required dollar amount (0 allowed) → integer cents. */
 const money = (label: string) =>
@@ -83,7 +84,7 @@ function wholeNumber(label: string, min: number, max: number, optional?: true): 
 }
 
 /** A checkbox from react-hook-form (boolean) or a plain form post ("on"). */
-const checkbox = z.union([z.boolean(), z.string(), z.undefined()]).transform((v) => v === true || v === "on" || v === "true");
+const checkbox = z.union([z.boolean(), storableString(), z.undefined()]).transform((v) => v === true || v === "on" || v === "true");
 
 // ── Dates ───────────────────────────────────────────────────────────────────────────────────────
 
@@ -92,7 +93,7 @@ const LOCAL = /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}$/;
 /** A datetime-local value in the show's zone ("2027-03-13T09:00"), or blank → null. */
 const localTime = (label: string) =>
   z
-    .union([z.string(), z.null(), z.undefined()])
+    .union([storableString(), z.null(), z.undefined()])
     .transform((v, ctx) => {
       const s = (v ?? "").trim();
       if (s === "") return null;
@@ -251,8 +252,8 @@ export type OptionsFormValues = z.input<typeof optionsSchema>;
 // ── Rules and status ────────────────────────────────────────────────────────────────────────────
 
 export const publishRulesSchema = z.object({
-  rulesText: z.string().trim().min(20, "Rules: write at least a few sentences (20 characters or more).").max(50_000, "Rules: at most 50,000 characters."),
-  releaseText: z.string().trim().min(20, "Release: write at least a few sentences (20 characters or more).").max(20_000, "Release: at most 20,000 characters."),
+  rulesText: storableString().trim().min(20, "Rules: write at least a few sentences (20 characters or more).").max(50_000, "Rules: at most 50,000 characters."),
+  releaseText: storableString().trim().min(20, "Release: write at least a few sentences (20 characters or more).").max(20_000, "Release: at most 20,000 characters."),
 });
 export type PublishRulesInput = z.output<typeof publishRulesSchema>;
 

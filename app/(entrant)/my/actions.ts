@@ -2,12 +2,13 @@
 // The entrant's own payment and withdrawal actions on "My entries".
 import { revalidatePath } from "next/cache";
 import { z } from "zod";
+import { storableString } from "@/lib/validation";
 import { startCheckout } from "@/db/queries/payments";
 import { withdrawEntry } from "@/db/queries/withdrawals";
 import { defineAction } from "@/lib/action";
 
 const checkoutSchema = z.object({
-  showSlug: z.string().trim().min(1, "Which show is this for?"),
+  showSlug: storableString().trim().min(1, "Which show is this for?"),
   entryIds: z.preprocess(
     (v) => (v === undefined || v === "" ? [] : Array.isArray(v) ? v : [v]),
     z.array(z.uuid("Choose entries from the list.")).min(1, "Choose at least one entry to pay for.").max(50, "Pay for at most 50 entries at once."),

@@ -3,6 +3,7 @@
 import { applyPaymentEvent, recordPaymentEvent } from "@/db/queries/payments";
 import { sendPaymentReceiptMail } from "@/lib/entry-mails";
 import { verifyWebhook, WebhookSignatureError } from "@/lib/payments";
+import { webhookEventSchema } from "@/lib/schemas/payments";
 
 // The Stripe SDK's signature check uses node:crypto.
 export const runtime = "nodejs";
@@ -18,6 +19,9 @@ export async function POST(req: Request): Promise<Response> {
       return Response.json({ error: "invalid_signature", message: err.message }, { status: 400 });
     }
     throw err;
+  }
+  if (!webhookEventSchema.safeParse(event).success) {
+    return Response.json({ error: "invalid_event", message: "The event does not have the shape of a payments event." }, { status: 400 });
   }
   const applied: { paidPaymentId: string | null } = { paidPaymentId: null };
   const { duplicate } = await recordPaymentEvent(event, async (tx, ev) => {

@@ -2,13 +2,14 @@
 // The chair's team actions: invite a judge, scribe or intake volunteer; remove a member.
 import { revalidatePath } from "next/cache";
 import { z } from "zod";
+import { storableString } from "@/lib/validation";
 import { sendDropOffReminders } from "@/db/queries/reminders";
 import { inviteToTeam, removeFromTeam } from "@/db/queries/team";
 import { defineAction } from "@/lib/action";
 import { sendInvitationMail } from "@/lib/invitation-mail";
 import { inviteSchema, removeRoleSchema, ROLE_LABELS } from "@/lib/schemas/show";
 
-const showSlug = z.string().min(1, "The show is missing.");
+const showSlug = storableString().min(1, "The show is missing.").max(120);
 
 export const inviteAction = defineAction(inviteSchema.extend({ showSlug }), async (input, viewer) => {
   const { token, show } = await inviteToTeam(viewer, input.showSlug, input);

@@ -2,11 +2,12 @@
 // The intake desk's actions: recording the size a quilt measures at drop-off.
 import { revalidatePath } from "next/cache";
 import { z } from "zod";
+import { storableString } from "@/lib/validation";
 import { recordMeasurement } from "@/db/queries/category-queue";
 import { defineAction } from "@/lib/action";
 import { measureSchema } from "@/lib/schemas/categories";
 
-const measureActionSchema = measureSchema.extend({ slug: z.string().trim().min(1).max(120) });
+const measureActionSchema = measureSchema.extend({ slug: storableString().trim().min(1).max(120) });
 
 export const measureEntryAction = defineAction(measureActionSchema, async ({ slug, ...input }, viewer) => {
   const result = await recordMeasurement(viewer, slug, input);

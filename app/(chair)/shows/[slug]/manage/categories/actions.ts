@@ -4,6 +4,7 @@
 // Each query checks the chair role and the judging lock itself.
 import { revalidatePath } from "next/cache";
 import { z } from "zod";
+import { storableString } from "@/lib/validation";
 import { saveCategorySet, type SaveSetResult } from "@/db/queries/categories";
 import { admitFromWaitlist, overrideEntryCategory, reviewSizeFlag, updateSizeTolerance } from "@/db/queries/category-queue";
 import { defineAction } from "@/lib/action";
@@ -11,7 +12,7 @@ import { admitSchema, categorySetSchema, overrideSchema, reviewSizeSchema, toler
 import { formatInches } from "@/scoring/units";
 import { plural } from "@/scoring/words";
 
-const showSlug = z.string().min(1, "The show is missing.");
+const showSlug = storableString().min(1, "The show is missing.").max(120);
 const withSlug = <S extends z.ZodType>(schema: S) => z.intersection(schema, z.object({ showSlug }));
 
 function refresh(slug: string) {

@@ -4,6 +4,7 @@
 // checks the chair role itself (addDeclaration and removeDeclaration also let a judge act for themselves).
 import { revalidatePath } from "next/cache";
 import { z } from "zod";
+import { storableString } from "@/lib/validation";
 import { resolveConflict } from "@/db/queries/judge-conflicts";
 import { sheetHistory } from "@/db/queries/judging";
 import { addDeclaration, deletePanel, removeDeclaration, reopenJudgeSheet, saveJudgingOptions, savePanel, saveScoreSheet, setCategoryJudging } from "@/db/queries/judging-setup";
@@ -20,7 +21,7 @@ import {
 } from "@/lib/schemas/judging";
 import { resolveConflictSchema } from "@/lib/schemas/judge-conflicts";
 
-const showSlug = z.string().min(1, "The show is missing.");
+const showSlug = storableString().min(1, "The show is missing.").max(120);
 const withSlug = <S extends z.ZodType>(schema: S) => z.intersection(schema, z.object({ showSlug }));
 
 function refresh(slug: string) {

@@ -3,6 +3,7 @@
 // show-wide awards and their picks, publish and unpublish. Each query checks the chair role.
 import { revalidatePath } from "next/cache";
 import { z } from "zod";
+import { storableString } from "@/lib/validation";
 import { clearPlacement, deleteAward, overridePlacement, recordPick, removePick, saveAward, saveResultRules, saveTieOrder } from "@/db/queries/result-changes";
 import { currentPublicationForChair, publishResults, unpublishResults } from "@/db/queries/results";
 import { defineAction } from "@/lib/action";
@@ -12,7 +13,7 @@ import {
 } from "@/lib/schemas/results";
 import { plural } from "@/scoring/words";
 
-const showSlug = z.string().min(1, "The show is missing.");
+const showSlug = storableString().min(1, "The show is missing.").max(120);
 const withSlug = <S extends z.ZodType>(schema: S) => z.intersection(schema, z.object({ showSlug }));
 
 function refresh(slug: string) {

@@ -2,11 +2,12 @@
 // The chair's settings actions: dates, one settings section at a time, rules versions, status.
 import { revalidatePath } from "next/cache";
 import { z } from "zod";
+import { storableString } from "@/lib/validation";
 import { changeShowStatus, publishRules, STATUS_WORDS, updateShowDates, updateShowSettings } from "@/db/queries/settings";
 import { defineAction } from "@/lib/action";
 import { datesSchema, publishRulesSchema, settingsSectionSchema, statusChangeSchema } from "@/lib/schemas/settings";
 
-const showSlug = z.string().min(1, "The show is missing.");
+const showSlug = storableString().min(1, "The show is missing.").max(120);
 const withSlug = <S extends z.ZodType>(schema: S) => z.intersection(schema, z.object({ showSlug }));
 
 function refresh(slug: string) {
