@@ -14,6 +14,7 @@ import { env } from "@/lib/env";
 import { renderEntryMail } from "@/lib/entry-mails";
 import { sendMail, type Mail } from "@/lib/mail";
 import { changedEntrants, resultWords, type PublishedEntry, type PublishedResults } from "@/scoring/results";
+import { errorSummary } from "@/lib/error-log";
 
 export type ResultMailReport = { sent: number; failed: number; alreadySent: number; unchanged: number };
 
@@ -68,7 +69,7 @@ export async function sendResultMails(publicationId: string): Promise<ResultMail
     } catch (err) {
       error = err instanceof Error ? err.message : String(err);
       report.failed++;
-      console.error("[results] mail failed", entrantId, err);
+      console.error("[results] mail failed", entrantId, errorSummary(err));
     }
     await db
       .insert(resultMails)

@@ -17,6 +17,7 @@ import type { z } from "zod";
 import type { aboutStepSchema, makersStepSchema, quiltStepSchema } from "@/lib/schemas/entry";
 import type { Viewer } from "@/lib/session";
 import { entryGaps, UNSET_LENGTH_UM, type Gap } from "@/scoring/entry-completeness";
+import { errorSummary } from "@/lib/error-log";
 
 /** Entries that hold one of the entrant's places (the per-entrant limit). */
 const NOT_COUNTED_FOR_ENTRANT = ["draft", "withdrawn"] as const;
@@ -248,7 +249,7 @@ export async function submitEntry(viewer: Viewer, entryId: string, input: Submit
     await sendEntryReceivedMail([entryId]);
   } catch (err) {
     // The entry is in; a lost mail must not undo that.
-    console.error("[entries] entry-received mail failed", { entryId, err });
+    console.error("[entries] entry-received mail failed", { entryId, err: errorSummary(err) });
   }
   return result;
 }

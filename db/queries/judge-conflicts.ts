@@ -9,6 +9,7 @@ import { categories, entries, judgeConflictRecords, judgeDeclarations, judgingPa
 import { writeAudit } from "@/db/queries/audit";
 import { conflict, notFound } from "@/lib/errors";
 import { requireShowRole, type Viewer } from "@/lib/session";
+import { errorSummary } from "@/lib/error-log";
 
 /** Entries that take part in judging: sent, judged, not withdrawn or declined. */
 export const JUDGED_OUT = ["draft", "withdrawn", "declined"] as const;
@@ -136,7 +137,7 @@ export async function noteConflicts(tx: Tx, showId: string, filter: { judgeIds?:
   try {
     await tx.transaction((sp) => recordConflicts(sp, showId, filter, foundWhen, actorUserId));
   } catch (err) {
-    console.error("[judging] could not record judge conflicts", { showId, filter, foundWhen, err });
+    console.error("[judging] could not record judge conflicts", { showId, filter, foundWhen, err: errorSummary(err) });
   }
 }
 

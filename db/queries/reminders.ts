@@ -7,6 +7,7 @@ import { settingsForShowId } from "@/db/queries/settings";
 import { entries } from "@/db/schema";
 import { sendDropOffReminderMail } from "@/lib/entry-mails";
 import { requireShowRole, type Viewer } from "@/lib/session";
+import { errorSummary } from "@/lib/error-log";
 
 export async function sendDropOffReminders(viewer: Viewer, showSlug: string): Promise<{ sent: number; failed: number }> {
   const show = await requireShowRole(viewer, showSlug, ["chair"]);
@@ -25,7 +26,7 @@ export async function sendDropOffReminders(viewer: Viewer, showSlug: string): Pr
       sent++;
     } catch (err) {
       failed++;
-      console.error("[reminders] drop-off reminder failed", { showId: show.showId, userId: p.userId }, err);
+      console.error("[reminders] drop-off reminder failed", { showId: show.showId, userId: p.userId }, errorSummary(err));
     }
   }
   await db.transaction((tx) =>

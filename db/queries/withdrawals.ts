@@ -13,6 +13,7 @@ import { isUuid } from "@/lib/ids";
 import { stripe } from "@/lib/payments";
 import { requireShowRole, type Viewer } from "@/lib/session";
 import { formatMoney, withdrawalRefundCents } from "@/scoring/fees";
+import { errorSummary } from "@/lib/error-log";
 
 const WITHDRAWABLE = new Set(["submitted", "paid", "accepted"]);
 /** The chair may also take out a quilt already at the show (checked in, judged, hanging). */
@@ -129,7 +130,7 @@ async function withdrawTx(tx: Tx, viewer: Viewer, entry: LockedEntry, now: Date,
           { idempotencyKey: `withdraw-${entry.id}` },
         );
       } catch (err) {
-        console.error("[withdraw] refund failed", err);
+        console.error("[withdraw] refund failed", errorSummary(err));
         throw conflict("The refund could not be made just now, so the entry is not withdrawn yet. Please try again in a few minutes.");
       }
       const refunded = Math.min(p!.amountCents, p!.refundedCents + refundCents);

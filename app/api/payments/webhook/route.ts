@@ -4,6 +4,7 @@ import { applyPaymentEvent, recordPaymentEvent } from "@/db/queries/payments";
 import { sendPaymentReceiptMail } from "@/lib/entry-mails";
 import { verifyWebhook, WebhookSignatureError } from "@/lib/payments";
 import { webhookEventSchema } from "@/lib/schemas/payments";
+import { errorSummary } from "@/lib/error-log";
 
 // The Stripe SDK's signature check uses node:crypto.
 export const runtime = "nodejs";
@@ -31,7 +32,7 @@ export async function POST(req: Request): Promise<Response> {
   if (paidPaymentId) {
     // The payment is committed either way; a failed mail must not make the provider redeliver
     // (the redelivery would be a duplicate and send nothing), so log it for the show to follow up.
-    await sendPaymentReceiptMail(paidPaymentId).catch((err: unknown) => console.error("[webhook] receipt mail failed", { paidPaymentId, err }));
+    await sendPaymentReceiptMail(paidPaymentId).catch((err: unknown) => console.error("[webhook] receipt mail failed", { paidPaymentId, err: errorSummary(err) }));
   }
   return Response.json({ received: true, duplicate });
 }

@@ -8,6 +8,7 @@ import { inviteToTeam, removeFromTeam } from "@/db/queries/team";
 import { defineAction } from "@/lib/action";
 import { sendInvitationMail } from "@/lib/invitation-mail";
 import { inviteSchema, removeRoleSchema, ROLE_LABELS } from "@/lib/schemas/show";
+import { errorSummary } from "@/lib/error-log";
 
 const showSlug = storableString().min(1, "The show is missing.").max(120);
 
@@ -17,7 +18,7 @@ export const inviteAction = defineAction(inviteSchema.extend({ showSlug }), asyn
   try {
     await sendInvitationMail({ email: input.email, role: input.role, showName: show.name, inviterName: viewer.name, token });
   } catch (err) {
-    console.error("[team] invitation mail failed", err);
+    console.error("[team] invitation mail failed", errorSummary(err));
     return { message: `The invitation is saved, but the e-mail to ${input.email} could not be sent. Try inviting again.` };
   }
   return { message: `Invitation sent to ${input.email} as ${ROLE_LABELS[input.role].toLowerCase()}.` };

@@ -7,6 +7,7 @@ import { defineAction } from "@/lib/action";
 import { sendDecisionMail } from "@/lib/entry-mails";
 import { acceptEntriesSchema, declineEntriesSchema, markPaidOfflineSchema, releaseDecisionsSchema } from "@/lib/schemas/chair-entries";
 import { plural } from "@/scoring/words";
+import { errorSummary } from "@/lib/error-log";
 
 function revalidate(slug: string) {
   revalidatePath(`/shows/${slug}/manage/entries`);
@@ -19,7 +20,7 @@ async function mailDecisions(entryIds: string[], done: string): Promise<{ messag
     await sendDecisionMail(entryIds);
     return { message: `${done} The entrants have been e-mailed.` };
   } catch (err) {
-    console.error("[entries] decision mail failed", err);
+    console.error("[entries] decision mail failed", errorSummary(err));
     return { message: `${done} The e-mails could not be sent; the decisions are saved.` };
   }
 }

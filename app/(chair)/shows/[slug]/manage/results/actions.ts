@@ -12,6 +12,7 @@ import {
   awardSchema, clearPlacementSchema, deleteAwardSchema, pickSchema, placementSchema, publishSchema, removePickSchema, resultRulesSchema, tieOrderSchema, unpublishSchema,
 } from "@/lib/schemas/results";
 import { plural } from "@/scoring/words";
+import { errorSummary } from "@/lib/error-log";
 
 const showSlug = storableString().min(1, "The show is missing.").max(120);
 const withSlug = <S extends z.ZodType>(schema: S) => z.intersection(schema, z.object({ showSlug }));
@@ -76,7 +77,7 @@ async function mailResults(publicationId: string, done: string): Promise<{ messa
   try {
     report = await sendResultMails(publicationId);
   } catch (err) {
-    console.error("[results] mails failed", err);
+    console.error("[results] mails failed", errorSummary(err));
     return { message: `${done} The e-mails could not be sent; use "Send the mails again".` };
   }
   const parts = [
