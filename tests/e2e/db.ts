@@ -50,3 +50,17 @@ export async function removeShow(showId: string) {
     await sql.end();
   }
 }
+
+/** The id of a sent entry that belongs to someone other than `email` (a demo entrant's). */
+export async function someoneElsesEntryId(email: string): Promise<string> {
+  const sql = connect();
+  try {
+    const [row] = await sql<{ id: string }[]>`
+      select e.id from entries e join "user" u on u.id = e.entrant_user_id
+      where u.email <> ${email} and e.status <> 'draft' order by e.created_at limit 1`;
+    if (!row) throw new Error("no other entrant's entry is seeded; start the app once so it seeds the demo");
+    return row.id;
+  } finally {
+    await sql.end();
+  }
+}

@@ -1,9 +1,10 @@
 // Journey, on a phone: a new quilter creates an account, registers a quilt in steps with two
 // photos, sends it, pays the entry fee on the (local) payment page, sees it paid in "My
-// entries", and the entry and receipt e-mails arrive.
+// entries", and the entry and receipt e-mails arrive; someone else's entry is a plain 404.
 import { expect, test } from "@playwright/test";
 import { phoneStyleJpeg, pngOf } from "../helpers/photo-fixtures";
 import { waitForMail } from "../helpers/mailbox";
+import { someoneElsesEntryId } from "./db";
 import { DEMO_SHOW, expectNoSidewaysScroll, linkFromMail, MAIL_WEB_URL, shootAllWidths, VIEWPORTS } from "./helpers";
 
 test("an entrant registers a quilt with two photos, pays, and gets the receipt", async ({ page }) => {
@@ -84,4 +85,12 @@ test("an entrant registers a quilt with two photos, pays, and gets the receipt",
   await expect(page.getByText("Paid").first()).toBeVisible();
   await expectNoSidewaysScroll(page);
   await shootAllWidths(page, "entry-my-entries-paid");
+
+  // Another entrant's entry, and each of its steps, answers 404 (no loading boundary streams a 200 first).
+  const theirs = await someoneElsesEntryId(email);
+  for (const path of [`/entries/${theirs}`, `/entries/${theirs}?step=photos`, `/entries/${theirs}?step=review`]) {
+    const res = await page.goto(path);
+    expect(res?.status(), path).toBe(404);
+    await expect(page.getByRole("heading", { level: 1 })).toHaveText("We can’t find that page");
+  }
 });

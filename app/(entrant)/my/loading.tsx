@@ -1,4 +1,5 @@
-// Loading "My entries" or "Account": header, then a section heading and cards.
+// Loading "My entries": header, then a section heading and cards. Kept beside the pages that never
+// refuse access: a loading boundary above a page that answers 404 would stream a 200 first.
 import { LoadingRegion, Skeleton } from "@/components/ui/skeleton";
 
 export default function Loading() {
