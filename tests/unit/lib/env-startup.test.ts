@@ -28,7 +28,7 @@ function start(vars: Record<string, string | undefined>) {
   for (const [k, v] of Object.entries(vars)) if (v !== undefined) env[k] = v;
   const r = spawnSync(process.execPath, [path.join(ROOT, "node_modules/tsx/dist/cli.mjs"), path.join(ROOT, "tests/helpers/load-env.ts")], {
     cwd: ROOT,
-    env,
+    env: env as NodeJS.ProcessEnv,
     encoding: "utf8",
     timeout: 60_000,
   });

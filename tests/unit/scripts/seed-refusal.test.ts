@@ -7,9 +7,10 @@ import { describe, expect, it } from "vitest";
 const ROOT = path.resolve(__dirname, "../../..");
 
 function seed(vars: Record<string, string>) {
+  const env: Record<string, string> = { PATH: process.env.PATH ?? "/usr/bin:/bin", ...vars };
   const r = spawnSync(process.execPath, [path.join(ROOT, "node_modules/tsx/dist/cli.mjs"), path.join(ROOT, "scripts/seed.ts")], {
     cwd: ROOT,
-    env: { PATH: process.env.PATH ?? "/usr/bin:/bin", ...vars },
+    env: env as NodeJS.ProcessEnv,
     encoding: "utf8",
     timeout: 60_000,
   });
