@@ -30,9 +30,8 @@ beforeAll(async () => {
   await ensureBucket();
   const show = await makeShow({ status: "judging" });
   const other = await makeShow();
-  [owner, chair, intake, judgeIn, judgeOut, scribeIn, otherEntrant, otherChair] = await Promise.all(
-    ["Owner", "Chair", "Intake", "Judge In", "Judge Out", "Scribe In", "Other Entrant", "Other Chair"].map((name) => makeUser({ name })),
-  );
+  const users = await Promise.all(["Owner", "Chair", "Intake", "Judge In", "Judge Out", "Scribe In", "Other Entrant", "Other Chair"].map((name) => makeUser({ name })));
+  [owner, chair, intake, judgeIn, judgeOut, scribeIn, otherEntrant, otherChair] = users as [TestUser, TestUser, TestUser, TestUser, TestUser, TestUser, TestUser, TestUser];
   await grantRole(chair.id, show.id, "chair");
   await grantRole(intake.id, show.id, "intake");
   for (const u of [judgeIn, judgeOut]) await grantRole(u.id, show.id, "judge");
