@@ -1,9 +1,12 @@
 // Root "not found": unknown addresses and notFound() outside a route group.
 import { House, SearchX } from "lucide-react";
+import { connection } from "next/server";
 import { BareShell } from "@/components/shell/bare-shell";
 import { ButtonLink } from "@/components/ui/button";
 
-export default function NotFound() {
+export default async function NotFound() {
+  // Rendered per request, not at build time: its scripts need this response's CSP nonce (proxy.ts).
+  await connection();
   return (
     <BareShell>
       <div className="max-w-prose space-y-4">

@@ -14,6 +14,7 @@ import {
 import { zodResolver } from "@hookform/resolvers/zod";
 import type { z } from "zod";
 import type { ActionResult } from "@/lib/action";
+import { TOO_LARGE_MESSAGE, tooLargeForAction } from "@/lib/request-limits";
 import { Alert } from "@/components/ui/alert";
 import { cx } from "@/components/ui/cx";
 
@@ -54,6 +55,11 @@ export function useActionForm<TIn extends FieldValues, TOut extends FieldValues,
 
   const onSubmit = form.handleSubmit(async (values) => {
     setStatus(null);
+    // Next.js refuses an action body over the limit before the action runs; say so plainly here.
+    if (tooLargeForAction(values)) {
+      setStatus({ tone: "error", message: TOO_LARGE_MESSAGE });
+      return;
+    }
     let result: ActionResult<R> | undefined;
     try {
       result = await opts.action(values);
@@ -62,7 +68,7 @@ export function useActionForm<TIn extends FieldValues, TOut extends FieldValues,
       // router is already navigating; there is nothing to show.
       if (isRedirectSignal(err)) return;
       console.error("[form] action failed", err);
-      setStatus({ tone: "error", message: "We could not reach Ribbonry. Check your connection and try again." });
+      setStatus({ tone: "error", message: thrownMessage() });
       return;
     }
     if (!result) return;
@@ -96,6 +102,15 @@ export function useActionForm<TIn extends FieldValues, TOut extends FieldValues,
 function messageAt<T extends FieldValues>(errors: FieldErrors<T>, name: string): string | undefined {
   const entry = (errors as Record<string, { message?: unknown } | undefined>)[name];
   return typeof entry?.message === "string" ? entry.message : undefined;
+}
+
+// The call itself failed: no network, or the server could not read what was sent (too large, or
+// an encoding it refuses), which reaches the browser as a rejected call, not an answer.
+function thrownMessage(): string {
+  if (typeof navigator !== "undefined" && navigator.onLine === false) {
+    return "You seem to be offline. Check your connection and try again; nothing was saved.";
+  }
+  return "Ribbonry could not take that. If you pasted a lot of text, it may be too much to send at once: shorten it and try again. Otherwise check your connection and try again; nothing was saved.";
 }
 
 function isRedirectSignal(err: unknown): boolean {

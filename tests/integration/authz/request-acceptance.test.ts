@@ -84,6 +84,9 @@ describe("state-changing routes refuse a foreign Origin (OWASP CSRF Prevention C
     expect(res.status, await res.clone().text()).toBe(c.expect[allowedRole(c)]);
   });
 
+  // better-auth checks Origin on its own endpoints, but skips the check under a test runner
+  // (its isTest() default), so tests/e2e/security-headers.spec.ts checks it on the built server.
+
   it("the payments webhook is exempt: a foreign Origin still reaches the signature check (400, not 403)", async () => {
     const handler = routes.get("POST /api/payments/webhook")!.POST as RouteHandler;
     const res = await handler(
