@@ -1,4 +1,5 @@
-// POST: a presigned upload URL for one photo of an entry (the file goes straight to storage).
+// POST: a presigned form upload (URL and signed fields, size and type bound) for one photo of an
+// entry; the browser posts the file straight to storage.
 import { presignEntryPhoto } from "@/db/queries/entry-photos";
 import { defineRoute } from "@/lib/api";
 import { presignPhotoSchema } from "@/lib/schemas/entry";
