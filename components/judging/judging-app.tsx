@@ -58,7 +58,7 @@ export function JudgingApp({ slug, notOnPanel }: { slug: string; notOnPanel?: Re
   if (judges.length === 0) {
     return (
       <div className="space-y-6">
-        <Alert tone="info" title="You are not on a judging panel of this show yet.">The chair puts judges and scribes on panels; until then, this list shows what is coming.</Alert>
+        <Alert tone="info" title="You are not on a judging panel of this show yet.">The chair puts judges and scribes on panels. Once you are on one, the quilts of your sessions are listed here.</Alert>
         {notOnPanel}
       </div>
     );

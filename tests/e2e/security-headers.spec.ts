@@ -82,7 +82,10 @@ async function violationsWhileLoading(page: Page, path: string): Promise<string[
   };
   page.on("console", onConsole);
   await page.goto(path);
-  await page.waitForLoadState("networkidle");
+  // "networkidle" never comes on pages that keep a request open; scripts have run by "load", and
+  // a short pause lets late refusals (fonts, workers) reach the console.
+  await page.waitForLoadState("load");
+  await page.waitForTimeout(1_500);
   page.off("console", onConsole);
   return seen;
 }
