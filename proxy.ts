@@ -1,9 +1,11 @@
 // Runs before every request (pages, route handlers, static files): refuses an address with a
-// broken %-escape or a NUL character with a 400 before Next.js tries to decode it, and adds the
+// broken %-escape or a NUL character with a 400 before Next.js tries to decode it, a server action
+// call larger than the limit with a 413, and adds the
 // Content-Security-Policy with a fresh nonce (Next.js reads it from the request header and puts
 // it on its own scripts) and, over HTTPS, HSTS. No database work here.
 import { NextResponse, type NextRequest } from "next/server";
 import { env } from "@/lib/env";
+import { ACTION_BODY_LIMIT_BYTES, TOO_LARGE_MESSAGE } from "@/lib/request-limits";
 import { contentSecurityPolicy, HSTS } from "@/lib/security-headers";
 
 const https = env.APP_URL.startsWith("https:");
@@ -13,7 +15,7 @@ const dev = env.NODE_ENV === "development";
 export function proxy(request: NextRequest) {
   const nonce = Buffer.from(crypto.randomUUID()).toString("base64");
   const csp = contentSecurityPolicy({ nonce, dev, storageOrigin, https });
-  const bad = badAddress(request);
+  const bad = badAddress(request) ?? oversizedAction(request);
   const response = bad ?? NextResponse.next({ request: { headers: withCsp(request.headers, nonce, csp) } });
   response.headers.set("Content-Security-Policy", csp);
   if (https) response.headers.set("Strict-Transport-Security", HSTS);
@@ -40,6 +42,17 @@ function badAddress(request: NextRequest): NextResponse | null {
     if (decoded.includes("\0")) return refuse(request);
   }
   return null;
+}
+
+/**
+ * A server action call whose declared size is over the limit: Next.js would refuse it inside the
+ * action handler with its own 500; answer 413 with a plain message first (RFC 9110 §15.5.14).
+ */
+function oversizedAction(request: NextRequest): NextResponse | null {
+  if (request.method !== "POST" || !request.headers.has("next-action")) return null;
+  const length = Number(request.headers.get("content-length") ?? "0");
+  if (!(length > ACTION_BODY_LIMIT_BYTES)) return null;
+  return new NextResponse(TOO_LARGE_MESSAGE, { status: 413, headers: { "content-type": "text/plain; charset=utf-8" } });
 }
 
 function rawPathAndQuery(url: string): string {

@@ -128,3 +128,12 @@ test("a profile form whose action call fails shows a plain message and keeps wha
   await expect(page.getByLabel("Guild")).toHaveValue("Lantern Quilters");
   await shootAllWidths(page, "form-call-failed");
 });
+
+test("a server action call over the size limit is a 413 with a plain message, not the framework's 500 (RFC 9110 §15.5.14)", async ({ page }) => {
+  const res = await page.request.post("/account", {
+    headers: { "next-action": "0".repeat(40), "content-type": "text/plain;charset=UTF-8" },
+    data: "x".repeat(2 * 1024 * 1024),
+  });
+  expect(res.status()).toBe(413);
+  expect(await res.text()).toMatch(/too much to send at once/);
+});
