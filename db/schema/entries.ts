@@ -85,6 +85,13 @@ export const entries = pgTable(
     paymentReference: text().notNull().default(""),
     withdrawnAt: timestamp({ withTimezone: true }),
     judged: boolean().notNull().default(true),
+    /**
+     * The chair's recorded exception: judge this entry although it is not paid (or not accepted at
+     * a juried show). Null = no exception; the reason is kept here and in the audit row.
+     */
+    judgeAnywayAt: timestamp({ withTimezone: true }),
+    judgeAnywayReason: text().notNull().default(""),
+    judgeAnywayBy: text().references(() => user.id, { onDelete: "set null" }),
     division: division().notNull().default("open"),
     categoryId: uuid().references(() => categories.id, { onDelete: "set null" }),
     categoryState: categoryState().notNull().default("undecided"),
