@@ -1,18 +1,7 @@
 // Loading "My entries": header, then a section heading and cards. Kept beside the pages that never
 // refuse access: a loading boundary above a page that answers 404 would stream a 200 first.
-import { LoadingRegion, Skeleton } from "@/components/ui/skeleton";
+import { CardsPageSkeleton } from "@/components/ui/cards-page-skeleton";
 
 export default function Loading() {
-  return (
-    <LoadingRegion>
-      <Skeleton className="h-10 w-56" />
-      <Skeleton className="mt-3 h-5 w-full max-w-prose" />
-      <Skeleton className="mt-10 h-7 w-48" />
-      <div className="mt-4 grid gap-4 md:grid-cols-2">
-        {Array.from({ length: 4 }, (_, i) => (
-          <Skeleton key={i} className="h-36 rounded-card" />
-        ))}
-      </div>
-    </LoadingRegion>
-  );
+  return <CardsPageSkeleton />;
 }

@@ -2,10 +2,8 @@
 // a valid input's shape and spoils one field, a JSON writer that can send what JSON.stringify
 // can't (1e309, -0, huge integers), and the world of shows, users and valid inputs the access
 // table uses (its rows/*.ts give every endpoint a valid call per role).
-import { readdirSync, statSync } from "node:fs";
-import path from "node:path";
 import fc from "fast-check";
-import { grantRole, makeEntry, makeShow, makeUser } from "../../helpers/factories";
+import { discoverRoutes as discoverModules } from "../authz/discover";
 import { ROLES, type Case, type Role, type World } from "../authz/table";
 
 /** FUZZ_SEED=123 npm test … replays another run; the seed is printed either way. */
@@ -145,75 +143,17 @@ export const inputFrom = (valid: unknown): fc.Arbitrary<unknown> =>
 
 // ── The world ────────────────────────────────────────────────────────────────────────────────────
 
-const APP = path.join(process.cwd(), "app");
-
-export function walk(dir: string, file: string, out: string[] = []): string[] {
-  for (const name of readdirSync(dir)) {
-    const p = path.join(dir, name);
-    if (statSync(p).isDirectory()) walk(p, file, out);
-    else if (name === file) out.push(p);
-  }
-  return out;
-}
-
-export const METHODS = ["GET", "POST", "PUT", "PATCH", "DELETE"] as const;
 export type RouteFn = (req: Request, ctx: { params: Promise<Record<string, string>> }) => Promise<Response>;
 export type ActionFn = (...args: unknown[]) => Promise<unknown>;
 
+// The same discovery, rows and cast of users as the access table.
+export { discoverActions, loadRows, makeWorld } from "../authz/discover";
+
+/** "METHOD /api/path" → its handler, for every route.ts under app/api. */
 export async function discoverRoutes(): Promise<Map<string, RouteFn>> {
   const found = new Map<string, RouteFn>();
-  for (const file of walk(path.join(APP, "api"), "route.ts")) {
-    const mod = (await import(file)) as Record<string, unknown>;
-    const urlPath = "/" + path.relative(APP, path.dirname(file)).split(path.sep).join("/");
-    for (const m of METHODS) if (typeof mod[m] === "function") found.set(`${m} ${urlPath}`, mod[m] as RouteFn);
-  }
+  for (const [key, mod] of await discoverModules()) found.set(key, mod[key.split(" ")[0]!] as RouteFn);
   return found;
-}
-
-export async function discoverActions(): Promise<Map<string, ActionFn>> {
-  const found = new Map<string, ActionFn>();
-  for (const file of walk(APP, "actions.ts")) {
-    const mod = (await import(file)) as Record<string, unknown>;
-    const where = path.relative(APP, path.dirname(file)).split(path.sep).join("/");
-    for (const [name, fn] of Object.entries(mod)) if (typeof fn === "function") found.set(`${where}#${name}`, fn as ActionFn);
-  }
-  return found;
-}
-
-export async function loadRows() {
-  const routes: Record<string, Case> = {};
-  const actions: Record<string, Case> = {};
-  const delegated = new Set<string>();
-  const dir = path.join(__dirname, "..", "authz", "rows");
-  for (const name of readdirSync(dir).filter((n) => n.endsWith(".ts")).sort()) {
-    const mod = (await import(path.join(dir, name))) as { routes?: Record<string, Case>; actions?: Record<string, Case>; delegated?: Set<string> };
-    Object.assign(routes, mod.routes ?? {});
-    Object.assign(actions, mod.actions ?? {});
-    for (const k of mod.delegated ?? []) delegated.add(k);
-  }
-  return { routes, actions, delegated };
-}
-
-/** The same cast as the access table: a show with every role, another show's chair, an admin. */
-export async function makeWorld(): Promise<World> {
-  const show = await makeShow();
-  const other = await makeShow();
-  const [entrant, judge, scribe, intake, chair, admin, otherChair] = await Promise.all([
-    makeUser({ name: "Entrant" }),
-    makeUser({ name: "Judge" }),
-    makeUser({ name: "Scribe" }),
-    makeUser({ name: "Intake" }),
-    makeUser({ name: "Chair" }),
-    makeUser({ name: "Admin", admin: true }),
-    makeUser({ name: "Chair of another show" }),
-  ]);
-  await grantRole(judge.id, show.id, "judge");
-  await grantRole(scribe.id, show.id, "scribe");
-  await grantRole(intake.id, show.id, "intake");
-  await grantRole(chair.id, show.id, "chair");
-  await grantRole(otherChair.id, other.id, "chair");
-  await makeEntry(show.id, entrant.id);
-  return { show, users: { entrant, judge, scribe, intake, chair, admin, otherChair } };
 }
 
 /** The first role the row lets through (2xx or a redirect); the fuzz runs as that role, and now and then as an outsider. */
