@@ -35,6 +35,11 @@ export const payments = pgTable(
     status: paymentStatus().notNull().default("open"),
     createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
     paidAt: timestamp({ withTimezone: true }),
+    /** Our own receipt number, shown on receipts instead of the provider's ids. */
+    receiptNumber: integer().notNull().unique().generatedByDefaultAsIdentity({ startWith: 1001 }),
+    /** The card's brand and last four digits as the provider reports them ("visa", "4242"); empty when unknown. */
+    cardBrand: text().notNull().default(""),
+    cardLast4: text().notNull().default(""),
   },
   (t) => [index("payments_entrant").on(t.entrantUserId)],
 );
