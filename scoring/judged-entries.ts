@@ -35,3 +35,8 @@ export function isJudgedEntry(e: JudgedEntryFacts, juried: boolean): boolean {
   if ((NEVER_JUDGED as readonly string[]).includes(e.status) || !e.judged || e.entryNumber === null) return false;
   return isCleared(e, juried) || e.judgeAnywayAt !== null;
 }
+
+/** A category for display-only quilts (its rules take only entries not judged): it needs no panel. */
+export function isDisplayOnlyCategory(conditions: readonly { kind: string; value?: unknown }[] | null | undefined): boolean {
+  return (conditions ?? []).some((c) => c.kind === "judged" && c.value === false);
+}

@@ -3,10 +3,10 @@
 // quilt facts the show releases, `show_settings.judge_fields`). The queue, the session, the sync
 // answers, the judging page and the photo route all go through these two.
 import "server-only";
-import { and, eq, inArray, isNotNull, notInArray, type SQL } from "drizzle-orm";
+import { and, eq, inArray, type SQL } from "drizzle-orm";
 import type { Tx } from "@/db/client";
 import { entries, judgingPanels, panelCategories, panelMembers, user } from "@/db/schema";
-import { JUDGED_OUT } from "@/db/queries/judge-conflicts";
+import { judgedEntries } from "@/db/queries/judged-entries";
 import { formatSize } from "@/scoring/units";
 
 type Reader = Pick<Tx, "select">;
@@ -47,9 +47,9 @@ export async function judgingScope(reader: Reader, showId: string, viewerId: str
   return { seats, judges, categoryIds: [...new Set(catRows.map((c) => c.categoryId))] };
 }
 
-/** Entries of the viewer's sessions: numbered, judged, still in the show, in their categories. */
+/** Entries of the viewer's sessions: the judged entries (db/queries/judged-entries.ts) in their categories. */
 export function inSessions(showId: string, categoryIds: readonly string[]): SQL {
-  return and(eq(entries.showId, showId), inArray(entries.categoryId, categoryIds.length ? [...categoryIds] : ["00000000-0000-0000-0000-000000000000"]), eq(entries.judged, true), notInArray(entries.status, [...JUDGED_OUT]), isNotNull(entries.entryNumber))!;
+  return and(judgedEntries(showId), inArray(entries.categoryId, categoryIds.length ? [...categoryIds] : ["00000000-0000-0000-0000-000000000000"]))!;
 }
 
 /** The quilt's own facts a release may draw on; never a name, contact or guild. */

@@ -2,11 +2,13 @@
 // scribes with their categories and session, the people judges declared, comment policy, quick
 // phrases and the fields released to judges; reopening a submitted sheet; the progress board.
 import "server-only";
-import { and, asc, eq, inArray, notInArray, sql } from "drizzle-orm";
+import { judgedEntries } from "@/db/queries/judged-entries";
+import { isDisplayOnlyCategory } from "@/scoring/judged-entries";
+import { and, asc, eq, inArray, sql } from "drizzle-orm";
 import { db, type Tx } from "@/db/client";
 import { categories, entries, judgeDeclarations, judgeSheets, judgingPanels, panelCategories, panelMembers, scoreSheets, showRoles, showSettings, shows, user } from "@/db/schema";
 import { writeAudit } from "@/db/queries/audit";
-import { conflictsForChair, JUDGED_OUT, judgeConflicts, recordConflicts } from "@/db/queries/judge-conflicts";
+import { conflictsForChair, judgeConflicts, recordConflicts } from "@/db/queries/judge-conflicts";
 import { settingsForShowId } from "@/db/queries/settings";
 import { badInput, conflict, conflictOnUnique, forbiddenError, isUniqueViolation, notFound } from "@/lib/errors";
 import type { z } from "zod";
@@ -25,7 +27,7 @@ export async function judgingSetup(viewer: Viewer, slug: string) {
   const [sheets, cats, panels, members, panelCats, declarations, staff, settings, conflicts] = await Promise.all([
     db.select().from(scoreSheets).where(eq(scoreSheets.showId, showId)).orderBy(asc(scoreSheets.name)),
     db
-      .select({ id: categories.id, code: categories.code, name: categories.name, method: categories.judgingMethod, scoreSheetId: categories.scoreSheetId, mergedIntoId: categories.mergedIntoId, precedence: categories.precedence })
+      .select({ id: categories.id, code: categories.code, name: categories.name, method: categories.judgingMethod, scoreSheetId: categories.scoreSheetId, mergedIntoId: categories.mergedIntoId, precedence: categories.precedence, conditions: categories.conditions })
       .from(categories)
       .where(eq(categories.showId, showId))
       .orderBy(asc(categories.precedence), asc(categories.code)),
@@ -40,7 +42,7 @@ export async function judgingSetup(viewer: Viewer, slug: string) {
   return {
     show: { slug, name },
     sheets: sheets.map((s) => ({ id: s.id, name: s.name, isDefault: s.isDefault, sheet: s.sheet, check: checkSheet(s.sheet) })),
-    categories: cats.filter((c) => !c.mergedIntoId),
+    categories: cats.filter((c) => !c.mergedIntoId).map(({ conditions, ...c }) => ({ ...c, displayOnly: isDisplayOnlyCategory(conditions as { kind: string; value?: unknown }[]) })),
     panels: panels.map((p) => ({
       ...p,
       judgeIds: members.filter((m) => m.panelId === p.id && m.role === "judge").map((m) => m.userId),
@@ -219,7 +221,7 @@ export async function progressBoard(viewer: Viewer, slug: string, now: Date = ne
   const placed = await db
     .select({ id: entries.id, categoryId: entries.categoryId })
     .from(entries)
-    .where(and(eq(entries.showId, showId), eq(entries.judged, true), notInArray(entries.status, [...JUDGED_OUT]), inArray(entries.categoryState, ["decided", "overridden"])));
+    .where(and(judgedEntries(showId), inArray(entries.categoryState, ["decided", "overridden"])));
   const sheets = await db
     .select({ entryId: judgeSheets.entryId, judgeUserId: judgeSheets.judgeUserId, status: judgeSheets.status, submittedAt: judgeSheets.submittedAt, reopenedAt: judgeSheets.reopenedAt, conflicts: sql<number>`jsonb_array_length(${judgeSheets.state} -> 'conflicts')` })
     .from(judgeSheets)
@@ -272,7 +274,7 @@ export async function progressBoard(viewer: Viewer, slug: string, now: Date = ne
     slowest,
     categories: [...byCategory].map(([id, t]) => ({ id, name: catName.get(id) ?? "?", ...t })),
     judges: [...byJudge].map(([id, t]) => ({ id, name: judgeName.get(id) ?? "?", ...t })),
-    unassigned: setup.categories.filter((c) => !setup.panels.some((p) => p.categoryIds.includes(c.id))).map((c) => `${c.code} ${c.name}`),
+    unassigned: setup.categories.filter((c) => !c.displayOnly && !setup.panels.some((p) => p.categoryIds.includes(c.id))).map((c) => `${c.code} ${c.name}`),
     sheets: await sheetsForBoard(showId),
   };
 }

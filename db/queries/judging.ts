@@ -2,12 +2,13 @@
 // own facts only (the fields the show releases), never the entrant, maker or quilter, their
 // contact or guild. Sheet changes from tablets are merged by scoring/sheet-sync.ts.
 import "server-only";
-import { and, asc, eq, inArray } from "drizzle-orm";
+import { judgedEntries } from "@/db/queries/judged-entries";
+import { and, asc, eq, inArray, sql } from "drizzle-orm";
 import { db, type Tx } from "@/db/client";
 import { categories, entries, entryPhotos, judgeSheets, scoreChanges, scoreSheets, user } from "@/db/schema";
 import { writeAudit } from "@/db/queries/audit";
 import { settingsForShowId } from "@/db/queries/settings";
-import { JUDGED_OUT, openConflicts } from "@/db/queries/judge-conflicts";
+import { openConflicts } from "@/db/queries/judge-conflicts";
 import { inSessions, judgingScope, QUILT_FACTS, releasedFacts } from "@/db/queries/judging-scope";
 import { AppError, conflict, forbiddenError } from "@/lib/errors";
 import type { SyncBatch } from "@/lib/schemas/judging";
@@ -167,14 +168,14 @@ export async function syncSheetChanges(viewer: Viewer, slug: string, batch: Sync
     const out: SyncResult = { results: [], sheets: [] };
     const targets = byEntry.size
       ? await tx
-          .select({ id: entries.id, categoryId: entries.categoryId, method: categories.judgingMethod, scoreSheetId: categories.scoreSheetId, status: entries.status, judged: entries.judged })
+          .select({ id: entries.id, categoryId: entries.categoryId, method: categories.judgingMethod, scoreSheetId: categories.scoreSheetId, judged: sql<boolean>`${judgedEntries(show.showId)}` })
           .from(entries)
           .innerJoin(categories, eq(categories.id, entries.categoryId))
           .where(and(eq(entries.showId, show.showId), inArray(entries.id, [...byEntry.keys()])))
       : [];
     for (const [entryId, changes] of byEntry) {
       const target = targets.find((t) => t.id === entryId);
-      if (!target || !target.categoryId || !rights.categoryIds.has(target.categoryId) || !target.judged || (JUDGED_OUT as readonly string[]).includes(target.status)) {
+      if (!target || !target.categoryId || !rights.categoryIds.has(target.categoryId) || !target.judged) {
         for (const c of changes) out.results.push({ key: c.key, entryId, outcome: { kind: "refused", text: "This entry isn't in your queue." }, duplicate: false });
         continue;
       }

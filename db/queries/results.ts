@@ -1,13 +1,13 @@
 // Results: the inputs of scoring/results.ts read from the database (submitted sheets, totals from
 // SQL, the chair's changes, awards and picks), the chair's review, and publishing / unpublishing.
 import "server-only";
-import { and, asc, desc, eq, inArray, isNull, notInArray, sql } from "drizzle-orm";
+import { judgedEntries } from "@/db/queries/judged-entries";
+import { and, asc, desc, eq, inArray, isNull, sql } from "drizzle-orm";
 import { db, type Tx } from "@/db/client";
 import {
   awardPicks, categories, entries, entryPhotos, judgeSheets, judgingPanels, panelCategories, panelMembers, placementOverrides, resultMails, resultPublications, scoreSheets, shows, showAwards, showSettings, tieOrders, user,
 } from "@/db/schema";
 import { writeAudit } from "@/db/queries/audit";
-import { JUDGED_OUT } from "@/db/queries/judging-setup";
 import { currentPublication } from "@/db/queries/published-results";
 import { lockShow } from "@/db/queries/settings";
 import { totalsInJs as totalsInJsWith, totalsInSql as totalsInSqlWith, type EntryTotals } from "@/db/totals";
@@ -48,7 +48,7 @@ async function loadCategories(reader: Reader, showId: string) {
     reader
       .select({ id: entries.id, entryNumber: entries.entryNumber, title: entries.title, entrantUserId: entries.entrantUserId, categoryId: entries.categoryId, quiltingMethod: entries.quiltingMethod, division: entries.division, widthUm: entries.widthUm, lengthUm: entries.lengthUm, measuredWidthUm: entries.measuredWidthUm, measuredLengthUm: entries.measuredLengthUm, sizeFlag: entries.sizeFlag, sizeFlagReviewedAt: entries.sizeFlagReviewedAt })
       .from(entries)
-      .where(and(eq(entries.showId, showId), eq(entries.judged, true), notInArray(entries.status, [...JUDGED_OUT]), inArray(entries.categoryState, ["decided", "overridden"])))
+      .where(and(judgedEntries(showId), inArray(entries.categoryState, ["decided", "overridden"])))
       .orderBy(asc(entries.entryNumber)),
     // Through the same reader, so a publish transaction snapshots what it locked.
     totalsInSqlWith(reader as Parameters<typeof totalsInSqlWith>[0], showId),

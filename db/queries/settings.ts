@@ -6,7 +6,9 @@ import { and, count, desc, eq, ne } from "drizzle-orm";
 import { db, type Tx } from "@/db/client";
 import { entries, showRulesVersions, showSettings, shows, user } from "@/db/schema";
 import { writeAudit } from "@/db/queries/audit";
-import { categorySetFor, judgingBlockers } from "@/db/queries/categories";
+import { categorySetFor } from "@/db/queries/categories";
+import { stageCounts } from "@/db/queries/stage-counts";
+import { checkStageMove, needsReason, NEXT_STAGE, STEP_BACK } from "@/scoring/stage-moves";
 import { activeCategories } from "@/scoring/category-sets";
 import { utcToZonedInput, zonedInputToUtc } from "@/components/format/zoned-time";
 import { badInput, conflict } from "@/lib/errors";
@@ -92,7 +94,7 @@ const settingsColumns = {
 
 type Reader = Pick<typeof db, "select">;
 
-async function currentRulesFor(reader: Reader, showId: string): Promise<CurrentRules | null> {
+export async function currentRulesFor(reader: Reader, showId: string): Promise<CurrentRules | null> {
   const [rules] = await reader
     .select({
       id: showRulesVersions.id,
@@ -188,7 +190,7 @@ export async function settingsForChair(viewer: Viewer, slug: string) {
       .orderBy(desc(showRulesVersions.version)),
     db.select({ n: count() }).from(entries).where(eq(entries.showId, showId)),
   ]);
-  return { show, settings, rulesHistory, entryCount: entryTotal?.n ?? 0, allowedMoves: STATUS_MOVES[show.status] };
+  return { show, settings, rulesHistory, entryCount: entryTotal?.n ?? 0, allowedMoves: STATUS_MOVES[show.status], nextStage: NEXT_STAGE[show.status], stepBack: STEP_BACK[show.status] };
 }
 export type ChairSettings = Awaited<ReturnType<typeof settingsForChair>>;
 
@@ -292,29 +294,34 @@ export const STATUS_WORDS: Record<string, string> = {
   archived: "finished",
 };
 
-/** Moves the show to its next stage when the move makes sense; otherwise says why not (409). */
+/**
+ * Moves the show between stages after the same check the chair saw (scoring/stage-moves.ts):
+ * blockers refuse it (409 with the list); warnings and steps back need the chair's reason, kept in
+ * the audit row with the warnings overridden.
+ */
 export async function changeShowStatus(viewer: Viewer, slug: string, input: StatusChangeInput, now: Date = new Date()) {
   const { showId } = await requireShowRole(viewer, slug, ["chair"]);
   return db.transaction(async (tx) => {
     const show = await lockShow(tx, showId);
     const from = show.status;
     const to = input.status;
-    const reasons: string[] = [];
-    if (from === to) reasons.push(`The show is already ${STATUS_WORDS[to]}.`);
-    else if (to === "results_published" || (from === "results_published" && to === "judging")) reasons.push("Publish or unpublish the results from Results, which checks every sheet first.");
-    else if (!STATUS_MOVES[from].includes(to)) {
-      const allowed = STATUS_MOVES[from].map((s) => `“${STATUS_WORDS[s]}”`).join(" or ");
-      reasons.push(`A show ${STATUS_WORDS[from]} can't move to “${STATUS_WORDS[to]}”${allowed ? `; it can move to ${allowed}` : ""}.`);
-    } else if (to === "entries_open") {
-      if (!show.entryClosesAt) reasons.push("Set the date entries close first (Dates).");
-      else if (show.entryClosesAt <= now) reasons.push("The closing date for entries has passed; move it later first (Dates).");
-      if (!(await currentRulesFor(tx, showId))) reasons.push("Publish the rules and release first (Rules and release).");
-    } else if (to === "judging") {
-      reasons.push(...(await judgingBlockers(tx, showId)));
+    const check = checkStageMove(from, to, await stageCounts(tx, showId, now));
+    if (check.blockers.length) throw conflict(check.blockers.join(" "), { status: check.blockers });
+    const reason = input.reason?.trim() ?? "";
+    if (needsReason(check) && !reason) {
+      const why = check.stepBack ? "Going back a stage needs a reason." : "Say why you are going ahead despite the open items.";
+      throw conflict(why, { reason: [why], warnings: check.warnings });
     }
-    if (reasons.length) throw conflict(reasons.join(" "), { status: reasons });
     await tx.update(shows).set({ status: to, updatedAt: now }).where(eq(shows.id, showId));
-    await writeAudit(tx, { actorUserId: viewer.id, showId, action: "show.status_changed", subjectType: "show", subjectId: showId, before: { status: from }, after: { status: to } });
+    await writeAudit(tx, {
+      actorUserId: viewer.id,
+      showId,
+      action: "show.status_changed",
+      subjectType: "show",
+      subjectId: showId,
+      before: { status: from },
+      after: { status: to, stepBack: check.stepBack, ...(reason ? { reason } : {}), ...(check.warnings.length ? { warningsOverridden: check.warnings } : {}) },
+    });
     return { from, to };
   });
 }

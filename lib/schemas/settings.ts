@@ -260,18 +260,20 @@ export type PublishRulesInput = z.output<typeof publishRulesSchema>;
 export const SHOW_STATUSES = ["draft", "entries_open", "entries_closed", "judging", "results_published", "archived"] as const;
 export type ShowStatusValue = (typeof SHOW_STATUSES)[number];
 
-/** The moves a chair may make; anything else is refused with the allowed ones named. */
+/** The moves a chair may make: the usual next step first, then the step back (with a reason). */
 export const STATUS_MOVES: Record<ShowStatusValue, readonly ShowStatusValue[]> = {
   draft: ["entries_open"],
   entries_open: ["entries_closed"],
-  entries_closed: ["entries_open", "judging"],
+  entries_closed: ["judging", "entries_open"],
   // Results go out (and come down) from the Results page, which checks every sheet first.
-  judging: [],
+  judging: ["entries_closed"],
   results_published: ["archived"],
   archived: [],
 };
 
 export const statusChangeSchema = z.object({
   status: z.enum(SHOW_STATUSES, "Status: choose one of the show's stages."),
+  /** Needed for a step back, or to go ahead despite warnings; kept in the audit row. */
+  reason: storableString().trim().max(2000, "Reason: at most 2,000 characters.").optional(),
 });
 export type StatusChangeInput = z.output<typeof statusChangeSchema>;

@@ -80,6 +80,14 @@ export const actions: Record<string, Case> = {
       return { showSlug: show.slug, judgeUserId: w.users.judge.id, entryId: entry.id, action: "allow", reason: "The chair has checked it." };
     },
   },
+  [`${base}#judgeAnywayAction`]: {
+    expect: only({ chair: 200 }),
+    input: async (w) => {
+      const show = await ownShow(w, "entries_closed");
+      const entry = await makeEntry(show.id, w.users.entrant.id, { status: "submitted" });
+      return { showSlug: show.slug, entryId: entry.id, judge: true, reason: "Paid in cash at the guild meeting." };
+    },
+  },
   [`${base}#saveJudgingOptionsAction`]: {
     expect: only({ chair: 200 }),
     input: async (w) => ({ showSlug: (await ownShow(w)).slug, commentPolicy: "placed", quickPhrases: ["Even binding."], judgeFields: ["title", "size"] }),

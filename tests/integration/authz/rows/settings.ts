@@ -1,7 +1,7 @@
 // Access rows for the chair's show settings: the settings route and every settings action.
 // Writes run against a show of their own (the world's chair made its chair too), so moving
 // dates or the stage never changes the shared show other rows rely on.
-import { grantRole, makeCategory, makeShow } from "../../../helpers/factories";
+import { grantRole, makeCategory, makeEntry, makeShow } from "../../../helpers/factories";
 import { only, type Case, type World } from "../table";
 
 async function ownShow(w: World, status: "entries_open" | "entries_closed" = "entries_open") {
@@ -47,8 +47,10 @@ export const actions: Record<string, Case> = {
     expect: only({ chair: 200 }),
     input: async (w) => {
       const show = await ownShow(w, "entries_closed");
-      await makeCategory(show.id);
-      return { showSlug: show.slug, status: "judging" };
+      const category = await makeCategory(show.id);
+      // A paid entry with a category: someone to judge, so nothing refuses the move.
+      await makeEntry(show.id, w.users.entrant.id, { status: "paid", paidAt: new Date(), categoryId: category.id, categoryState: "decided" });
+      return { showSlug: show.slug, status: "judging", reason: "" };
     },
   },
 };

@@ -19,7 +19,8 @@ import {
   reopenSchema,
   saveSheetSchema,
 } from "@/lib/schemas/judging";
-import { resolveConflictSchema } from "@/lib/schemas/judge-conflicts";
+import { judgeAnywaySchema, resolveConflictSchema } from "@/lib/schemas/judge-conflicts";
+import { setJudgeAnyway } from "@/db/queries/judged-entries";
 
 const showSlug = storableString().min(1, "The show is missing.").max(120);
 const withSlug = <S extends z.ZodType>(schema: S) => z.intersection(schema, z.object({ showSlug }));
@@ -95,4 +96,12 @@ export type SheetHistoryRow = Awaited<ReturnType<typeof sheetHistory>>[number];
 /** Reads one sheet's history for the progress board (an action, so it needs no route of its own). */
 export const sheetHistoryAction = defineAction<typeof historySchema, SheetHistoryRow[]>(historySchema, async (input, viewer) => {
   return { data: await sheetHistory(viewer, input.showSlug, input.sheetId) };
+});
+
+export const judgeAnywayAction = defineAction(withSlug(judgeAnywaySchema), async (input, viewer) => {
+  const { entryNumber, changed } = await setJudgeAnyway(viewer, input.showSlug, input);
+  refresh(input.showSlug);
+  revalidatePath(`/shows/${input.showSlug}/manage/settings`);
+  if (!changed) return { message: `Nothing changed for entry ${entryNumber}.` };
+  return { message: input.judge ? `Entry ${entryNumber} will be judged although it is not paid.` : `Entry ${entryNumber} is judged only once it is paid.` };
 });

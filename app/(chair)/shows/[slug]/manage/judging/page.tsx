@@ -35,7 +35,8 @@ export default async function JudgingSetupPage({ params }: Props) {
   const viewer = await pageViewer();
   const setup = await guardQuery(judgingSetup(viewer, slug));
   const assigned = new Set(setup.panels.flatMap((p) => p.categoryIds));
-  const unassigned = setup.categories.filter((c) => !assigned.has(c.id));
+  // Display-only categories are never judged, so they need no panel.
+  const unassigned = setup.categories.filter((c) => !c.displayOnly && !assigned.has(c.id));
 
   return (
     <div className="space-y-8">

@@ -38,7 +38,7 @@ export const publishRulesAction = defineAction(withSlug(publishRulesSchema), asy
 });
 
 export const changeStatusAction = defineAction(withSlug(statusChangeSchema), async (input, viewer) => {
-  const { to } = await changeShowStatus(viewer, input.showSlug, { status: input.status });
+  const { to } = await changeShowStatus(viewer, input.showSlug, { status: input.status, reason: input.reason });
   refresh(input.showSlug);
   return { message: `The show is now ${STATUS_WORDS[to]}.` };
 });
