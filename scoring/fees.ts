@@ -22,7 +22,14 @@ export const FEE_KIND_LABELS: Record<FeeKind, string> = {
   critique: "Critique fee",
 };
 
-export type FeeEntry = { entryId: string; entryNumber: number | null; title: string; critiqueRequested: boolean };
+export type FeeEntry = {
+  entryId: string;
+  entryNumber: number | null;
+  title: string;
+  critiqueRequested: boolean;
+  /** Already paid, with a critique asked for afterwards: only the critique fee is charged. */
+  critiqueOnly?: boolean;
+};
 
 export type FeeLine = { entryId: string; kind: FeeKind; amountCents: number; description: string };
 
@@ -74,6 +81,10 @@ export function quoteFees(input: {
   let entryFeesCents = 0;
   let capSavingCents = 0;
   for (const e of entries) {
+    if (e.critiqueOnly) {
+      if (schedule.critiqueFeeCents > 0) lines.push({ entryId: e.entryId, kind: "critique", amountCents: schedule.critiqueFeeCents, description: lineName("critique", e) });
+      continue;
+    }
     const entryFee = Math.min(rate, capLeft);
     capLeft -= entryFee;
     entryFeesCents += entryFee;
@@ -87,6 +98,24 @@ export function quoteFees(input: {
   }
   const totalCents = lines.reduce((sum, l) => sum + l.amountCents, 0);
   return { member, late, lines, entryFeesCents, capSavingCents, totalCents };
+}
+
+/** How the entry fee was settled, read from `entries.payment_reference`. */
+export function paidOnline(paymentReference: string): boolean {
+  return paymentReference.startsWith("card ") || paymentReference === "no fee due";
+}
+
+/**
+ * Whether an entry owes the critique fee on its own: it asked for a critique, the show charges
+ * for one, the entry fee is already settled online (a checkout, or nothing was due), and no paid
+ * checkout carried its critique line. Before the entry is paid the critique rides on its checkout.
+ */
+export function critiqueFeeDue(
+  e: { critiqueRequested: boolean; paidAt: Date | null; paymentReference: string },
+  critiqueFeeCents: number,
+  critiqueLinePaid: boolean,
+): boolean {
+  return e.critiqueRequested && critiqueFeeCents > 0 && e.paidAt !== null && paidOnline(e.paymentReference) && !critiqueLinePaid;
 }
 
 /** Refund on withdrawal: the show's percent of the entry fee charged for that entry, rounded down to the cent. */

@@ -7,6 +7,7 @@ import { Award, CircleSlash, FileText } from "lucide-react";
 import { withdrawEntryAction } from "@/app/(entrant)/my/actions";
 import { EntryStatusBadge, entryStatusInfo } from "@/components/entries/entry-status";
 import { plainReasons, sizeFirst, storedHeadline } from "@/components/entries/category-words";
+import { CritiqueToggle, type CritiqueState } from "@/components/entries/critique-toggle";
 import { RibbonSwatch } from "@/components/results/ribbon-swatch";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
@@ -29,6 +30,7 @@ export type EntryCardProps = {
     refundIfWithdrawnCents: number;
     category: { state: string; code: string | null; name: string | null; reasons: string[] } | null;
     waitlistReason: string;
+    critique?: CritiqueState;
     /** Once the show's results are published: the result in words and the critique (or why none). */
     result?: {
       words: string;
@@ -39,9 +41,11 @@ export type EntryCardProps = {
   };
   currency: string;
   refundPercent: number;
+  /** The show's critique fee; 0 = critiques are not asked for separately. */
+  critiqueFeeCents?: number;
 };
 
-export function EntryCard({ entry: e, currency, refundPercent }: EntryCardProps) {
+export function EntryCard({ entry: e, currency, refundPercent, critiqueFeeCents = 0 }: EntryCardProps) {
   const info = entryStatusInfo(e.status);
   return (
     <li className="flex flex-col gap-2 rounded-card border border-line bg-surface p-5 shadow-card">
@@ -82,6 +86,7 @@ export function EntryCard({ entry: e, currency, refundPercent }: EntryCardProps)
           Still to do: {info.missing}
         </p>
       ) : null}
+      {e.critique && critiqueFeeCents > 0 && e.status !== "draft" && !e.result ? <CritiqueToggle entryId={e.id} state={e.critique} feeCents={critiqueFeeCents} currency={currency} /> : null}
       {e.canWithdraw ? <WithdrawEntry entry={e} currency={currency} refundPercent={refundPercent} /> : null}
     </li>
   );

@@ -92,6 +92,13 @@ export function useActionForm<TIn extends FieldValues, TOut extends FieldValues,
     setStatus({ tone: "success", message: result.message ?? opts.successMessage ?? "Saved." });
     if (opts.resetOnSuccess) form.reset(opts.defaultValues);
     opts.onSuccess?.(result);
+  }, (errors) => {
+    // The browser check stopped the save: say so at the top, with every reason, so a message beside
+    // a field scrolled out of view (or one the form does not show) never leaves the button silent.
+    const details = Object.values(errors as Record<string, { message?: unknown } | undefined>)
+      .map((e) => (typeof e?.message === "string" ? e.message : null))
+      .filter((m): m is string => m !== null);
+    setStatus({ tone: "error", message: "Not saved yet: some fields need attention.", details });
   });
 
   const errorOf = (name: Path<TIn>) => messageAt(form.formState.errors, name);

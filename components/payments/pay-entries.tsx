@@ -25,7 +25,8 @@ export type PayEntriesProps = {
     critiqueFeeCents: number;
     feeCapCents: number | null;
   };
-  entries: { id: string; entryNumber: number | null; title: string; critiqueRequested: boolean }[];
+  /** `critiqueOnly`: already paid, owing only the critique fee asked for afterwards. */
+  entries: { id: string; entryNumber: number | null; title: string; critiqueRequested: boolean; critiqueOnly?: boolean }[];
 };
 
 export function PayEntries(props: PayEntriesProps) {
@@ -41,7 +42,7 @@ export function PayEntries(props: PayEntriesProps) {
         schedule: { ...props.schedule, lateFeeFromAt: props.schedule.lateFeeFromAt ? new Date(props.schedule.lateFeeFromAt) : null },
         member: props.member,
         at: new Date(),
-        entries: props.entries.filter((e) => selected.has(e.id)).map((e) => ({ entryId: e.id, entryNumber: e.entryNumber, title: e.title, critiqueRequested: e.critiqueRequested })),
+        entries: props.entries.filter((e) => selected.has(e.id)).map((e) => ({ entryId: e.id, entryNumber: e.entryNumber, title: e.title, critiqueRequested: e.critiqueRequested, critiqueOnly: e.critiqueOnly })),
         entryFeesAlreadyPaidCents: props.entryFeesAlreadyPaidCents,
       }),
     [props, selected],
@@ -69,7 +70,7 @@ export function PayEntries(props: PayEntriesProps) {
   const { schedule } = props;
   return (
     <section aria-labelledby={headingId} className="space-y-4 rounded-card border-2 border-plum-200 bg-plum-50/40 p-4 sm:p-5">
-      <h3 id={headingId} className="text-xl">Pay entry fees</h3>
+      <h3 id={headingId} className="text-xl">{props.entries.every((e) => e.critiqueOnly) ? "Pay critique fees" : "Pay entry fees"}</h3>
       {error ? <Alert live tone="error" title={error} /> : null}
       <fieldset className="space-y-1">
         <legend className="font-semibold">Entries to pay for</legend>
@@ -81,7 +82,7 @@ export function PayEntries(props: PayEntriesProps) {
             checked={selected.has(e.id)}
             onChange={(ev) => toggle(e.id, ev.currentTarget.checked)}
             label={`${e.entryNumber === null ? "" : `Entry ${e.entryNumber}: `}${e.title}`}
-            hint={e.critiqueRequested ? "Critique requested" : undefined}
+            hint={e.critiqueOnly ? "Entry fee paid; critique fee due" : e.critiqueRequested ? "Critique requested" : undefined}
           />
         ))}
       </fieldset>

@@ -3,12 +3,13 @@
 import "server-only";
 import { asc, desc, eq } from "drizzle-orm";
 import { db } from "@/db/client";
-import { entryFeesPaidCents, memberAt, scheduleOf } from "@/db/queries/payments";
+import { CRITIQUE_PAYABLE, critiqueLinesPaid, entryFeesPaidCents, memberAt, scheduleOf } from "@/db/queries/payments";
 import { myResults } from "@/db/queries/published-results";
 import { settingsForShowId } from "@/db/queries/settings";
 import { entrantMayWithdraw, refundIfWithdrawn } from "@/db/queries/withdrawals";
 import { categories, entries, shows } from "@/db/schema";
 import type { Viewer } from "@/lib/session";
+import { critiqueFeeDue, paidOnline } from "@/scoring/fees";
 
 /** What the entrant sees: waiting list is its own state, and a decision shows only once released. */
 export function displayStatusOf(e: { status: string; waitlisted: boolean; paidAt: Date | null; decisionReleasedAt: Date | null }): string {
@@ -76,9 +77,12 @@ export async function myEntriesByShow(viewer: Viewer, now = new Date()) {
       const settings = await settingsForShowId(s.showId);
       const member = await memberAt(db, viewer.id, s.guildName);
       const withdrawOpen = entrantMayWithdraw({ status: s.showStatus, entryClosesAt: s.entryClosesAt }, now);
+      const critiquePaid = await critiqueLinesPaid(db, list.map((e) => e.id));
       const shaped = await Promise.all(
         list.map(async (e) => {
           const paidByCard = e.paymentReference.startsWith("card ");
+          const critiqueDue = CRITIQUE_PAYABLE.has(e.status) && critiqueFeeDue(e, settings.critiqueFeeCents, critiquePaid.has(e.id));
+          const critiqueOpen = withdrawOpen && WITHDRAWABLE.has(e.status) && settings.critiqueFeeCents > 0;
           const refund = paidByCard ? await refundIfWithdrawn(db, e.id, settings.withdrawalRefundPercent) : null;
           return {
             id: e.id,
@@ -89,12 +93,17 @@ export async function myEntriesByShow(viewer: Viewer, now = new Date()) {
             status: displayStatusOf(e),
             decisionReason: e.status === "declined" && e.decisionReleasedAt ? e.decisionReason : "",
             critiqueRequested: e.critiqueRequested,
+            /** The critique fee is owed on its own (asked for after the entry fee was paid). */
+            critiqueDue,
+            critiquePaid: critiquePaid.has(e.id),
+            /** Whether the critique checkbox on the card may be changed now, and if not while open, why. */
+            critiqueChangeable: critiqueOpen && !(e.critiqueRequested && critiquePaid.has(e.id)) && !(!e.critiqueRequested && e.paidAt !== null && !paidOnline(e.paymentReference)),
             // Drafts are not placed yet; withdrawn and declined entries are out of the show.
             category: e.status === "draft" || e.status === "withdrawn" || e.status === "declined" ? null : categoryOf(e),
             waitlistReason: e.waitlisted ? e.waitlistReason : "",
             paid: e.paidAt !== null,
             paidByCard,
-            canPay: e.status === "submitted" && !e.waitlisted && e.paidAt === null,
+            canPay: (e.status === "submitted" && !e.waitlisted && e.paidAt === null) || critiqueDue,
             canWithdraw: withdrawOpen && WITHDRAWABLE.has(e.status),
             refundIfWithdrawnCents: refund?.refundCents ?? 0,
             result: results.get(e.id) ?? null,
@@ -115,6 +124,7 @@ export async function myEntriesByShow(viewer: Viewer, now = new Date()) {
           dropOffEndsAt: s.dropOffEndsAt,
         },
         currency: settings.currency,
+        critiqueFeeCents: settings.critiqueFeeCents,
         juried: settings.juried,
         refundPercent: settings.withdrawalRefundPercent,
         schedule: scheduleOf(settings),

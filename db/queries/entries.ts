@@ -96,6 +96,7 @@ export async function entryForEntrant(viewer: Viewer, entryId: string) {
     judged: e.judged,
     division: e.division,
     youthAge: e.youthAge,
+    critiqueRequested: e.critiqueRequested,
   };
   return {
     entry,
@@ -135,6 +136,8 @@ export async function saveEntryStep(viewer: Viewer, entryId: string, { step, inp
   await db.transaction(async (tx) => {
     const a = await entryAccess(viewer, entryId, tx, true);
     assertEditable(a);
+    // Once sent, the critique request changes on "My entries" (which reprices an open checkout), never here.
+    if (a.entry.status !== "draft") delete changes.critiqueRequested;
     const [saved] = await tx.update(entries).set({ ...changes, updatedAt: new Date() }).where(eq(entries.id, entryId)).returning();
     await writeAudit(tx, { actorUserId: viewer.id, showId: a.show.id, action: `entry.${step}_saved`, subjectType: "entry", subjectId: entryId, after: changes });
     // A sent entry is placed again whenever what the rules read changes (size, techniques, makers…).
@@ -174,6 +177,7 @@ function columnsFor({ step, input }: StepInput, settings: EffectiveSettings): Pa
     judged: input.judged === "judged",
     division: input.division,
     youthAge: input.division === "youth" ? Number(input.youthAge) : null,
+    ...(input.critiqueRequested === undefined ? {} : { critiqueRequested: input.critiqueRequested }),
   };
 }
 

@@ -7,7 +7,7 @@
 // for the same session) changes nothing. Entries are marked paid only while still unpaid.
 import "server-only";
 import { randomUUID } from "node:crypto";
-import { and, asc, eq, inArray, isNull, ne } from "drizzle-orm";
+import { and, asc, eq, inArray, isNotNull, isNull, ne } from "drizzle-orm";
 import type Stripe from "stripe";
 import { db, type Tx } from "@/db/client";
 import { writeAudit } from "@/db/queries/audit";
@@ -18,7 +18,10 @@ import { badInput, conflict, notFound } from "@/lib/errors";
 import { stripe } from "@/lib/payments";
 import type { Viewer } from "@/lib/session";
 import { takenSoFar, type AccountEntry, type AccountPayment } from "@/exports/entrant-accounts";
-import { isGuildMember, quoteFees, type FeeSchedule } from "@/scoring/fees";
+import { critiqueFeeDue, isGuildMember, quoteFees, type FeeSchedule } from "@/scoring/fees";
+
+/** Entry statuses in which a critique fee asked for after paying can still be paid (before intake). */
+export const CRITIQUE_PAYABLE = new Set(["paid", "accepted"]);
 
 /**
  * Records the event; `apply` (e.g. marking an entry fee paid) runs in the same transaction and only
@@ -171,13 +174,16 @@ export async function startCheckout(viewer: Viewer, input: { showSlug: string; e
 
   return db.transaction(async (tx) => {
     const rows = await tx
-      .select({ id: entries.id, entryNumber: entries.entryNumber, title: entries.title, status: entries.status, waitlisted: entries.waitlisted, paidAt: entries.paidAt, critiqueRequested: entries.critiqueRequested })
+      .select({ id: entries.id, entryNumber: entries.entryNumber, title: entries.title, status: entries.status, waitlisted: entries.waitlisted, paidAt: entries.paidAt, paymentReference: entries.paymentReference, critiqueRequested: entries.critiqueRequested })
       .from(entries)
       .where(and(inArray(entries.id, ids), eq(entries.entrantUserId, viewer.id), eq(entries.showId, show.id)))
       .orderBy(asc(entries.entryNumber))
       .for("update");
     if (rows.length !== ids.length) throw notFound("One of these entries is not yours at this show.");
-    const unpayable = rows.find((r) => r.status !== "submitted" || r.waitlisted || r.paidAt !== null);
+    // A paid entry whose critique was asked for afterwards pays the critique fee on its own.
+    const critiquePaid = await critiqueLinesPaid(tx, ids);
+    const critiqueOnly = new Set(rows.filter((r) => CRITIQUE_PAYABLE.has(r.status) && critiqueFeeDue(r, settings.critiqueFeeCents, critiquePaid.has(r.id))).map((r) => r.id));
+    const unpayable = rows.find((r) => !critiqueOnly.has(r.id) && (r.status !== "submitted" || r.waitlisted || r.paidAt !== null));
     if (unpayable) {
       const why = unpayable.paidAt ? "is already paid" : unpayable.waitlisted ? "is on the waiting list" : `is ${unpayable.status}`;
       throw conflict(`Entry ${unpayable.entryNumber ?? unpayable.title} ${why}, so it cannot be paid now.`, { entryIds: [`Entry ${unpayable.entryNumber ?? unpayable.title} ${why}.`] });
@@ -189,14 +195,15 @@ export async function startCheckout(viewer: Viewer, input: { showSlug: string; e
       schedule: scheduleOf(settings),
       member,
       at: now,
-      entries: rows.map((r) => ({ entryId: r.id, entryNumber: r.entryNumber, title: r.title, critiqueRequested: r.critiqueRequested })),
+      entries: rows.map((r) => ({ entryId: r.id, entryNumber: r.entryNumber, title: r.title, critiqueRequested: r.critiqueRequested, critiqueOnly: critiqueOnly.has(r.id) })),
       entryFeesAlreadyPaidCents: await entryFeesPaidCents(tx, viewer.id, show.id, { schedule: scheduleOf(settings), member }),
     });
     const back = (q: string) => new URL(`/my?${q}`, env.APP_URL).toString();
 
     if (quote.totalCents === 0) {
       await tx.insert(payments).values({ id: paymentId, showId: show.id, entrantUserId: viewer.id, amountCents: 0, currency: settings.currency, status: "paid", paidAt: now });
-      await tx.update(entries).set({ status: "paid", paidAt: now, paymentReference: "no fee due", updatedAt: now }).where(inArray(entries.id, ids));
+      const unpaid = ids.filter((id) => !critiqueOnly.has(id));
+      if (unpaid.length) await tx.update(entries).set({ status: "paid", paidAt: now, paymentReference: "no fee due", updatedAt: now }).where(inArray(entries.id, unpaid));
       await writeAudit(tx, { actorUserId: viewer.id, showId: show.id, action: "payment.no_fee_due", subjectType: "payment", subjectId: paymentId, after: { entryIds: ids } });
       return { paymentId, url: back(`paid=${paymentId}`), totalCents: 0 };
     }
@@ -264,7 +271,16 @@ export async function applyPaymentEvent(tx: Tx, event: Stripe.Event): Promise<{ 
   await tx.update(payments).set({ status: "paid", paidAt: now }).where(eq(payments.id, payment.id));
   await writeAudit(tx, { actorUserId: null, showId: payment.showId, action: "payment.paid", subjectType: "payment", subjectId: payment.id, before: { status: payment.status }, after: { status: "paid", eventId: event.id, reference } });
 
-  const itemEntryIds = (await tx.selectDistinct({ entryId: paymentItems.entryId }).from(paymentItems).where(eq(paymentItems.paymentId, payment.id))).map((r) => r.entryId);
+  const items = await tx.select({ entryId: paymentItems.entryId, kind: paymentItems.kind }).from(paymentItems).where(eq(paymentItems.paymentId, payment.id));
+  // Lines carrying only a critique fee are for entries already paid: nothing to mark on the entry.
+  const critiqueOnlyIds = new Set(items.filter((i) => i.kind === "critique" && !items.some((o) => o.entryId === i.entryId && o.kind !== "critique")).map((i) => i.entryId));
+  const paidAlready = critiqueOnlyIds.size
+    ? new Set((await tx.select({ id: entries.id }).from(entries).where(and(inArray(entries.id, [...critiqueOnlyIds]), isNotNull(entries.paidAt)))).map((r) => r.id))
+    : new Set<string>();
+  for (const id of paidAlready) {
+    await writeAudit(tx, { actorUserId: null, showId: payment.showId, action: "entry.critique_paid", subjectType: "entry", subjectId: id, after: { reference, paymentId: payment.id } });
+  }
+  const itemEntryIds = [...new Set(items.map((i) => i.entryId))].filter((id) => !paidAlready.has(id));
   if (itemEntryIds.length) {
     const marked = await tx
       .update(entries)
@@ -292,6 +308,17 @@ export async function paymentStatusForEntrant(viewer: Viewer, paymentId: string)
     .where(and(eq(payments.id, paymentId), eq(payments.entrantUserId, viewer.id)))
     .limit(1);
   return row ?? null;
+}
+
+/** Entries among `entryIds` whose critique line was on a checkout that was paid (even if refunded since). */
+export async function critiqueLinesPaid(reader: Pick<Tx, "select">, entryIds: string[]): Promise<Set<string>> {
+  if (entryIds.length === 0) return new Set();
+  const rows = await reader
+    .select({ entryId: paymentItems.entryId })
+    .from(paymentItems)
+    .innerJoin(payments, eq(payments.id, paymentItems.paymentId))
+    .where(and(inArray(paymentItems.entryId, entryIds), eq(paymentItems.kind, "critique"), inArray(payments.status, ["paid", "refunded", "partially_refunded"])));
+  return new Set(rows.map((r) => r.entryId));
 }
 
 export { entryFeesPaidCents, expireOpenPaymentsFor, memberAt, scheduleOf };

@@ -92,17 +92,24 @@ export function centsForInput(cents: number | null): string {
 /** Our own sanity limit: a declared value above $10 million is a slipped key. */
 const MAX_VALUE_CENTS = 1_000_000_000;
 
+/** What is wrong with an amount of dollars typed in a field, or null when it is fine. */
+function moneyIssue(v: string, label: string, required: boolean): string | null {
+  if (v === "" && !required) return null;
+  const cents = dollarsToCents(v);
+  if (cents === null) return `Give ${label} in dollars, e.g. 1200 or 1,250.50.`;
+  if (cents <= 0) return `${label[0]!.toUpperCase()}${label.slice(1)} must be more than $0.`;
+  if (cents > MAX_VALUE_CENTS) return `That's over $10,000,000: check ${label}.`;
+  return null;
+}
+
 const money = (label: string, required: boolean) =>
   z
     .string()
     .trim()
     .max(20)
     .superRefine((v, ctx) => {
-      if (v === "" && !required) return;
-      const cents = dollarsToCents(v);
-      if (cents === null) ctx.addIssue({ code: "custom", message: `Give ${label} in dollars, e.g. 1200 or 1,250.50.` });
-      else if (cents <= 0) ctx.addIssue({ code: "custom", message: `${label[0]!.toUpperCase()}${label.slice(1)} must be more than $0.` });
-      else if (cents > MAX_VALUE_CENTS) ctx.addIssue({ code: "custom", message: `That's over $10,000,000: check ${label}.` });
+      const message = moneyIssue(v, label, required);
+      if (message) ctx.addIssue({ code: "custom", message });
     });
 
 export const aboutStepSchema = z
@@ -110,12 +117,20 @@ export const aboutStepSchema = z
     statement: storableString().trim().max(5000, "Keep the statement under 5,000 characters.").min(1, "Write a short artist statement."),
     declaredValue: money("the declared value", true),
     forSale: z.boolean(),
-    price: money("the price", false),
+    // Checked only while "for sale" is ticked: a field the form hides never blocks a save.
+    price: z.string().trim(),
     judged: z.enum(["judged", "display"], "Choose judged or display only."),
     division: z.enum(["open", "youth", "first_time"], "Choose a division."),
-    youthAge: storableString().trim().max(3),
+    // Checked only for the youth division, the only time the form shows it.
+    youthAge: z.string().trim(),
+    /** Asks for a judge's critique (the show's critique fee is charged in checkout). */
+    critiqueRequested: z.boolean().optional(),
   })
   .superRefine((v, ctx) => {
+    if (v.forSale) {
+      const message = v.price.length > 20 ? "Give the price in dollars, e.g. 1200 or 1,250.50." : moneyIssue(v.price, "the price", false);
+      if (message) ctx.addIssue({ code: "custom", path: ["price"], message });
+    }
     if (v.division === "youth") {
       const age = Number(v.youthAge);
       if (!/^\d{1,2}$/.test(v.youthAge) || age < 3 || age > 18) {

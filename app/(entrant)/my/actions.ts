@@ -3,6 +3,7 @@
 import { revalidatePath } from "next/cache";
 import { z } from "zod";
 import { storableString } from "@/lib/validation";
+import { setCritiqueRequest } from "@/db/queries/critique-requests";
 import { startCheckout } from "@/db/queries/payments";
 import { withdrawEntry } from "@/db/queries/withdrawals";
 import { defineAction } from "@/lib/action";
@@ -28,4 +29,13 @@ export const withdrawEntryAction = defineAction(withdrawSchema, async (input, vi
   const result = await withdrawEntry(viewer, input.entryId);
   revalidatePath("/my");
   return { message: result.message, data: result };
+});
+
+const critiqueSchema = z.object({ entryId: z.uuid("Choose an entry."), requested: z.boolean("Say whether you want a critique.") });
+
+/** Asks for (or stops asking for) a judge's critique of a sent entry while the show takes entries. */
+export const setCritiqueRequestAction = defineAction(critiqueSchema, async (input, viewer) => {
+  const result = await setCritiqueRequest(viewer, input.entryId, input.requested);
+  revalidatePath("/my");
+  return { message: result.message };
 });

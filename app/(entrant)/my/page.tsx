@@ -75,7 +75,13 @@ function ShowGroup({ group }: { group: MyShow }) {
       ) : null}
       <ul className="grid gap-4 md:grid-cols-2">
         {group.entries.map((e) => (
-          <EntryCard key={e.id} entry={e} currency={group.currency} refundPercent={group.refundPercent} />
+          <EntryCard
+            key={e.id}
+            entry={{ ...e, critique: { critiqueRequested: e.critiqueRequested, critiqueDue: e.critiqueDue, critiquePaid: e.critiquePaid, critiqueChangeable: e.critiqueChangeable } }}
+            currency={group.currency}
+            refundPercent={group.refundPercent}
+            critiqueFeeCents={group.critiqueFeeCents}
+          />
         ))}
       </ul>
       {payable.length > 0 ? (
@@ -87,7 +93,7 @@ function ShowGroup({ group }: { group: MyShow }) {
           member={group.member}
           entryFeesAlreadyPaidCents={group.entryFeesAlreadyPaidCents}
           schedule={{ ...group.schedule, lateFeeFromAt: group.schedule.lateFeeFromAt?.toISOString() ?? null }}
-          entries={payable.map((e) => ({ id: e.id, entryNumber: e.entryNumber, title: e.title, critiqueRequested: e.critiqueRequested }))}
+          entries={payable.map((e) => ({ id: e.id, entryNumber: e.entryNumber, title: e.title, critiqueRequested: e.critiqueRequested, critiqueOnly: e.critiqueDue }))}
         />
       ) : null}
       <DropOff group={group} />

@@ -1,6 +1,7 @@
 "use client";
 // Step 3: the artist statement (word limit counted live), declared value, sale, judging, division.
 import { useMemo } from "react";
+import Link from "next/link";
 import { ActionForm } from "@/components/forms/action-form";
 import { Alert } from "@/components/ui/alert";
 import { CheckboxField, TextareaField, TextField } from "@/components/ui/field";
@@ -8,11 +9,14 @@ import { DIVISION_LABELS } from "@/components/entries/labels";
 import { WordCount } from "@/components/entries/word-count";
 import { saveAboutAction } from "@/app/(entrant)/entries/[id]/actions";
 import { aboutStepSchemaFor, type AboutStepInput } from "@/lib/schemas/entry";
+import { formatMoney } from "@/scoring/fees";
 import { Choice } from "./choice";
 import { StepButtons } from "./step-buttons";
 import { useStepForm } from "./use-step-form";
 
-export function AboutStep({ entryId, defaults, wordLimit, backHref, nextHref }: { entryId: string; defaults: AboutStepInput; wordLimit: number; backHref: string; nextHref: string }) {
+type Critique = { feeCents: number; currency: string; changeHere: boolean } | null;
+
+export function AboutStep({ entryId, defaults, wordLimit, critique, backHref, nextHref }: { entryId: string; defaults: AboutStepInput; wordLimit: number; critique: Critique; backHref: string; nextHref: string }) {
   const schema = useMemo(() => aboutStepSchemaFor(wordLimit), [wordLimit]);
   const { ctl, setIntent } = useStepForm({
     schema,
@@ -52,6 +56,20 @@ export function AboutStep({ entryId, defaults, wordLimit, backHref, nextHref }: 
 
       <Choice legend="Division" error={ctl.errorOf("division")} options={Object.entries(DIVISION_LABELS)} register={register("division")} />
       {watch("division") === "youth" ? <TextField label="Age of the youth entrant" inputMode="numeric" autoComplete="off" error={ctl.errorOf("youthAge")} {...register("youthAge")} /> : null}
+
+      {critique ? (
+        critique.changeHere ? (
+          <CheckboxField
+            label={`Ask for a judge’s critique (${formatMoney(critique.feeCents, critique.currency)}, added to your entry fee)`}
+            hint="Written comments from the judges, sent with your results. You can change this on My entries until entries close."
+            {...register("critiqueRequested")}
+          />
+        ) : (
+          <p className="text-sm">
+            {defaults.critiqueRequested ? "A judge’s critique is asked for." : "No judge’s critique is asked for."} Change it on <Link href="/my">My entries</Link> until entries close.
+          </p>
+        )
+      ) : null}
 
       <StepButtons backHref={backHref} pending={ctl.pending} onIntent={setIntent} />
     </ActionForm>

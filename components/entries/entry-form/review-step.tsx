@@ -84,6 +84,7 @@ export function ReviewStep({ data, category }: { data: EntryForForm; category: C
         <Row label="Declared value">{e.declaredValueCents > 0 ? dollars(e.declaredValueCents) : null}</Row>
         <Row label="For sale">{e.forSale ? `Yes${e.priceCents ? `, ${dollars(e.priceCents)}` : ""}` : "No"}</Row>
         <Row label="Judging">{e.judged ? "Judged" : "Display only"}</Row>
+        {settings.critiqueFeeCents > 0 ? <Row label="Judge’s critique">{e.critiqueRequested ? "Asked for" : "Not asked for"}</Row> : null}
         <Row label="Division">{labelOf(DIVISION_LABELS, e.division)}{e.division === "youth" && e.youthAge ? `, age ${e.youthAge}` : ""}</Row>
       </Section>
       <Section entryId={e.id} step="photos" editable={editable}>

@@ -105,3 +105,23 @@ describe("formatMoney", () => {
     expect(formatMoney(1499, "usd")).toBe("$14.99");
   });
 });
+
+describe("a critique asked for after the entry fee was paid", () => {
+  it("is charged on its own: no entry or late fee, and the cap is not touched", async () => {
+    const { quoteFees: quote, critiqueFeeDue } = await import("@/scoring/fees");
+    const q = quote({
+      schedule: { entryFeeCents: 2500, memberEntryFeeCents: 1500, lateFeeCents: 500, lateFeeFromAt: new Date(0), critiqueFeeCents: 500, feeCapCents: 5000 },
+      member: false,
+      at: new Date(),
+      entries: [{ entryId: "e1", entryNumber: 101, title: "Quilt 101", critiqueRequested: true, critiqueOnly: true }],
+      entryFeesAlreadyPaidCents: 2500,
+    });
+    expect(q.lines).toEqual([{ entryId: "e1", kind: "critique", amountCents: 500, description: "Critique fee — entry 101: Quilt 101" }]);
+    expect(q.totalCents).toBe(500);
+    const paid = { critiqueRequested: true, paidAt: new Date(), paymentReference: "card pi_1" };
+    expect(critiqueFeeDue(paid, 500, false)).toBe(true);
+    expect(critiqueFeeDue(paid, 500, true)).toBe(false);
+    expect(critiqueFeeDue({ ...paid, paymentReference: "cash" }, 500, false)).toBe(false);
+    expect(critiqueFeeDue({ ...paid, paidAt: null }, 500, false)).toBe(false);
+  });
+});

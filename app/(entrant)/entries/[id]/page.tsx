@@ -137,8 +137,10 @@ function StepBody({ data, step, back, next, category }: { data: EntryForForm; st
       judged: e.judged ? ("judged" as const) : ("display" as const),
       division: e.division,
       youthAge: e.youthAge === null ? "" : String(e.youthAge),
+      critiqueRequested: e.critiqueRequested,
     };
-    return <AboutStep entryId={e.id} defaults={defaults} wordLimit={settings.statementWordLimit} backHref={back} nextHref={next} />;
+    const critique = settings.critiqueFeeCents > 0 ? { feeCents: settings.critiqueFeeCents, currency: settings.currency, changeHere: e.status === "draft" } : null;
+    return <AboutStep entryId={e.id} defaults={defaults} wordLimit={settings.statementWordLimit} critique={critique} backHref={back} nextHref={next} />;
   }
   if (step === "photos") {
     const views = settings.requiredPhotoViews;

@@ -11,6 +11,10 @@ export const actions: Record<string, Case> = {
     expect: only({ entrant: 200 }, 404),
     input: async (w) => ({ showSlug: w.show.slug, entryIds: [await entrantsEntry(w)] }),
   },
+  "(entrant)/my#setCritiqueRequestAction": {
+    expect: only({ entrant: 200 }, 404),
+    input: async (w) => ({ entryId: await entrantsEntry(w), requested: true }),
+  },
   "(entrant)/my#withdrawEntryAction": {
     expect: only({ entrant: 200 }, 404),
     input: async (w) => ({ entryId: await entrantsEntry(w) }),
