@@ -8,7 +8,7 @@ import { entries, paymentItems, payments, shows, user } from "@/db/schema";
 import { formatDateRange } from "@/components/format/dates";
 import { env } from "@/lib/env";
 import { sendMail } from "@/lib/mail";
-import { formatMoney } from "@/scoring/fees";
+import { cardWords, formatMoney } from "@/scoring/fees";
 
 const escapeHtml = (s: string) =>
   s.replace(/[&<>"']/g, (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c]!);
@@ -124,7 +124,7 @@ export async function sendEntryReceivedMail(entryIds: string[]): Promise<void> {
 /** The receipt for one checkout: its lines, the total and the entry numbers. */
 export async function sendPaymentReceiptMail(paymentId: string): Promise<void> {
   const [payment] = await db
-    .select({ id: payments.id, amountCents: payments.amountCents, currency: payments.currency, status: payments.status, showId: shows.id, showName: shows.name, email: user.email, name: user.name })
+    .select({ id: payments.id, amountCents: payments.amountCents, currency: payments.currency, status: payments.status, receiptNumber: payments.receiptNumber, cardBrand: payments.cardBrand, cardLast4: payments.cardLast4, checkoutSessionId: payments.checkoutSessionId, showId: shows.id, showName: shows.name, email: user.email, name: user.name })
     .from(payments)
     .innerJoin(shows, eq(shows.id, payments.showId))
     .innerJoin(user, eq(user.id, payments.entrantUserId))
@@ -132,7 +132,7 @@ export async function sendPaymentReceiptMail(paymentId: string): Promise<void> {
     .limit(1);
   if (!payment || payment.status === "open" || payment.status === "expired") return;
   const lines = await db
-    .select({ description: paymentItems.description, amountCents: paymentItems.amountCents, entryNumber: entries.entryNumber, title: entries.title, reference: entries.paymentReference })
+    .select({ description: paymentItems.description, amountCents: paymentItems.amountCents, entryNumber: entries.entryNumber, title: entries.title })
     .from(paymentItems)
     .innerJoin(entries, eq(entries.id, paymentItems.entryId))
     .where(eq(paymentItems.paymentId, paymentId))
@@ -140,18 +140,18 @@ export async function sendPaymentReceiptMail(paymentId: string): Promise<void> {
   const numbers = [...new Set(lines.map((l) => l.entryNumber).filter((n): n is number => n !== null))];
   const money = (c: number) => formatMoney(c, payment.currency);
   const { fromName, replyTo } = await senderFor({ id: payment.showId, name: payment.showName });
-  const reference = lines.find((l) => l.reference.startsWith("card "))?.reference;
   await sendMail({
     to: payment.email,
     subject: `Payment received: ${payment.showName} (${money(payment.amountCents)})`,
     fromName,
     replyTo,
     ...renderEntryMail({
-      heading: `Receipt: ${money(payment.amountCents)} to ${payment.showName}`,
+      heading: `Receipt ${payment.receiptNumber}: ${money(payment.amountCents)} to ${payment.showName}`,
       intro: [`Hello ${payment.name}, we have received your payment for ${numbers.length === 1 ? "entry" : "entries"} ${numbers.join(", ")}.`],
       sections: [{ title: "What you paid for", items: [...lines.map((l) => `${l.description}: ${money(l.amountCents)}`), `Total: ${money(payment.amountCents)}`] }],
       closing: [
-        ...(reference ? [`Payment reference: ${reference}`] : []),
+        // Our receipt number and the card in words; the provider's internal ids stay out of the mail.
+        `Receipt number: ${payment.receiptNumber}.${payment.checkoutSessionId ? ` Paid by ${cardWords(payment.cardBrand, payment.cardLast4)}.` : ""}`,
         "Next: bring each quilt to drop-off with its label sewn on and its entry number on the bag.",
       ],
       link: { text: "Open My entries", url: myEntriesUrl() },

@@ -124,6 +124,28 @@ export function withdrawalRefundCents(entryFeePaidCents: number, refundPercent: 
   return Math.floor((entryFeePaidCents * pct) / 100);
 }
 
+// The card networks' own spellings of the brands the payments API reports (Stripe API reference,
+// Charge.payment_method_details.card.brand).
+const CARD_BRANDS: Record<string, string> = {
+  amex: "American Express",
+  cartes_bancaires: "Cartes Bancaires",
+  diners: "Diners Club",
+  discover: "Discover",
+  eftpos_au: "eftpos",
+  jcb: "JCB",
+  link: "Link",
+  mastercard: "Mastercard",
+  unionpay: "UnionPay",
+  visa: "Visa",
+};
+
+/** "Visa card ending 4242"; "card" alone when the provider told us nothing. */
+export function cardWords(brand: string, last4: string): string {
+  const name = CARD_BRANDS[brand] ?? (brand && brand !== "unknown" ? brand[0]!.toUpperCase() + brand.slice(1) : "");
+  if (!last4) return name ? `${name} card` : "card";
+  return `${name ? `${name} card` : "card"} ending ${last4}`;
+}
+
 /** "$25.00" — amounts are integer cents. */
 export function formatMoney(cents: number, currency = "usd"): string {
   return new Intl.NumberFormat("en-US", { style: "currency", currency: currency.toUpperCase() }).format(cents / 100);

@@ -303,11 +303,30 @@ export async function applyPaymentEvent(tx: Tx, event: Stripe.Event): Promise<{ 
 export async function paymentStatusForEntrant(viewer: Viewer, paymentId: string) {
   if (!/^[0-9a-f-]{36}$/i.test(paymentId)) return null;
   const [row] = await db
-    .select({ id: payments.id, status: payments.status, amountCents: payments.amountCents, currency: payments.currency })
+    .select({ id: payments.id, status: payments.status, amountCents: payments.amountCents, currency: payments.currency, receiptNumber: payments.receiptNumber })
     .from(payments)
     .where(and(eq(payments.id, paymentId), eq(payments.entrantUserId, viewer.id)))
     .limit(1);
   return row ?? null;
+}
+
+/**
+ * Keeps the card's brand and last four digits on a paid payment, read from the provider after the
+ * payment is committed (Stripe API: Checkout Session → PaymentIntent.latest_charge →
+ * Charge.payment_method_details.card). Unknown stays empty; the receipt then says "card".
+ */
+export async function recordCardDetails(paymentId: string, provider: Stripe = stripe): Promise<void> {
+  const [p] = await db.select({ sessionId: payments.checkoutSessionId, last4: payments.cardLast4 }).from(payments).where(eq(payments.id, paymentId));
+  if (!p?.sessionId || p.last4) return;
+  const session = await provider.checkout.sessions.retrieve(p.sessionId);
+  const intentId = typeof session.payment_intent === "string" ? session.payment_intent : session.payment_intent?.id;
+  if (!intentId) return;
+  const intent = await provider.paymentIntents.retrieve(intentId);
+  const chargeId = typeof intent.latest_charge === "string" ? intent.latest_charge : intent.latest_charge?.id;
+  if (!chargeId) return;
+  const card = (await provider.charges.retrieve(chargeId)).payment_method_details?.card;
+  if (!card?.last4 || !/^\d{4}$/.test(card.last4)) return;
+  await db.update(payments).set({ cardBrand: (card.brand ?? "").slice(0, 40), cardLast4: card.last4 }).where(eq(payments.id, paymentId));
 }
 
 /** Entries among `entryIds` whose critique line was on a checkout that was paid (even if refunded since). */

@@ -6,10 +6,11 @@
 //   GET  /v1/checkout/sessions/:id
 //   POST /v1/checkout/sessions/:id/expire
 //   POST /v1/refunds                          (payment_intent + amount, against a paid session)
+//   GET  /v1/payment_intents/:id, GET /v1/charges/:id  (of paid sessions; the card is Visa 4242)
 //   Bearer (or Basic) secret-key auth, Stripe-shaped errors, Request-Id, Idempotency-Key replay.
 //   A hosted test checkout page (GET/POST /pay/:id, GET /pay/:id/cancel) and signed webhook events
 //   checkout.session.completed / checkout.session.expired, retried with bounded backoff.
-// Not covered: Prices/Products objects, customers, PaymentIntents as resources, list endpoints,
+// Not covered: Prices/Products objects, customers, creating or confirming PaymentIntents, list endpoints,
 //   `expand`, subscriptions/setup mode, refunds, API-version differences.
 // Test controls (not Stripe): GET /_fake/health, GET /_fake/events, POST /_fake/events/:id/resend,
 //   POST /_fake/sessions/:id/complete, POST /_fake/events/send.
@@ -112,6 +113,11 @@ export async function startPaymentsFake(opts: PaymentsFakeOptions): Promise<Paym
   const idempotent = new Map<string, { fingerprint: string; status: number; body: string }>();
   const refundedByIntent = new Map<string, number>();
   const refunds: Json[] = [];
+  // A paid session's PaymentIntent and its Charge, as the API returns them (Stripe API reference:
+  // PaymentIntent.latest_charge, Charge.payment_method_details.card.brand / last4). The fake's test
+  // card is always a Visa ending 4242, Stripe's own test card number.
+  const intents = new Map<string, Json>();
+  const charges = new Map<string, Json>();
   const timers = new Set<NodeJS.Timeout>();
   let stopped = false;
   let baseUrl = "";
@@ -241,6 +247,18 @@ export async function startPaymentsFake(opts: PaymentsFakeOptions): Promise<Paym
     s.status = "complete";
     s.payment_status = "paid";
     s.payment_intent = newId("pi_test");
+    const chargeId = newId("ch_test");
+    const paymentMethodId = newId("pm_test");
+    const created = nowSec();
+    intents.set(s.payment_intent, {
+      id: s.payment_intent, object: "payment_intent", amount: s.amount_total, amount_received: s.amount_total, currency: s.currency,
+      status: "succeeded", latest_charge: chargeId, payment_method: paymentMethodId, payment_method_types: ["card"], created, livemode: false, metadata: {},
+    });
+    charges.set(chargeId, {
+      id: chargeId, object: "charge", amount: s.amount_total, amount_captured: s.amount_total, currency: s.currency, paid: true, captured: true,
+      status: "succeeded", payment_intent: s.payment_intent, payment_method: paymentMethodId, created, livemode: false, metadata: {},
+      payment_method_details: { type: "card", card: { brand: "visa", last4: "4242", exp_month: 12, exp_year: new Date().getUTCFullYear() + 3, funding: "credit", country: "US" } },
+    });
     s.customer_details = { email: s.customer_email };
     s.url = null;
     info(`session ${id} paid`);
@@ -344,7 +362,15 @@ export async function startPaymentsFake(opts: PaymentsFakeOptions): Promise<Paym
       return [200, stored.event.data.object];
     }
     if (method === "POST" && path === "/v1/refunds") return [200, createRefund(parseForm(body))];
-    throw new ApiError(404, "invalid_request_error", `Unrecognized request URL (${method}: ${path}). The payments fake covers only Checkout Sessions and refunds.`);
+    if (method === "GET" && (m = path.match(/^\/v1\/payment_intents\/([^/]+)$/))) return [200, lookUp(intents, "payment_intent", decodeURIComponent(m[1]!))];
+    if (method === "GET" && (m = path.match(/^\/v1\/charges\/([^/]+)$/))) return [200, lookUp(charges, "charge", decodeURIComponent(m[1]!))];
+    throw new ApiError(404, "invalid_request_error", `Unrecognized request URL (${method}: ${path}). The payments fake covers only Checkout Sessions, refunds, and reading payment intents and charges.`);
+  }
+
+  function lookUp(store: Map<string, Json>, kind: string, id: string): Json {
+    const found = store.get(id);
+    if (!found) throw new ApiError(404, "invalid_request_error", `No such ${kind}: '${id}'`, { code: "resource_missing", param: "id" });
+    return found;
   }
 
   // A refund of part or all of a paid session's payment intent; never more than was paid.

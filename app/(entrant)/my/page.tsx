@@ -29,7 +29,7 @@ async function ReturnBanner({ viewer, paid, cancelled }: { viewer: Viewer; paid?
     return <Alert live tone="info" title="Payment is being confirmed">This usually takes a few seconds. Reload the page to see your entries marked paid.</Alert>;
   }
   if (payment.status === "expired") return <Alert live tone="warning" title="This payment was not completed">Nothing was charged for it. You can pay again below.</Alert>;
-  return <Alert live tone="success" title="Payment received — receipt e-mailed">{formatMoney(payment.amountCents, payment.currency)} paid. Thank you.</Alert>;
+  return <Alert live tone="success" title="Payment received — receipt e-mailed">{formatMoney(payment.amountCents, payment.currency)} paid, receipt number {payment.receiptNumber}. Thank you.</Alert>;
 }
 
 function DropOff({ group }: { group: MyShow }) {

@@ -74,7 +74,7 @@ describe("sendPaymentReceiptMail", () => {
   it("lists each line, the total and the entry numbers", async () => {
     const entrant = await person();
     const e = await makeEntry(show.id, entrant.id, { title: "Ocean Waves", status: "paid", paymentReference: "card pi_test_receipt" });
-    const [p] = await db.insert(payments).values({ showId: show.id, entrantUserId: entrant.id, amountCents: 3000, currency: "usd", status: "paid", paidAt: new Date() }).returning();
+    const [p] = await db.insert(payments).values({ showId: show.id, entrantUserId: entrant.id, checkoutSessionId: `cs_test_receipt_${e.id}`, amountCents: 3000, currency: "usd", status: "paid", paidAt: new Date(), cardBrand: "visa", cardLast4: "4242" }).returning();
     await db.insert(paymentItems).values([
       { paymentId: p!.id, entryId: e.id, amountCents: 2000, kind: "entry", description: `Entry fee — entry ${e.entryNumber}: Ocean Waves` },
       { paymentId: p!.id, entryId: e.id, amountCents: 1000, kind: "critique", description: `Critique fee — entry ${e.entryNumber}: Ocean Waves` },
@@ -86,7 +86,9 @@ describe("sendPaymentReceiptMail", () => {
       expect(part).toContain(`Entry fee — entry ${e.entryNumber}: Ocean Waves: $20.00`);
       expect(part).toContain(`Critique fee — entry ${e.entryNumber}: Ocean Waves: $10.00`);
       expect(part).toContain("Total: $30.00"); // 2000 + 1000 = 3000 cents
-      expect(part).toContain("card pi_test_receipt");
+      // Our receipt number and the card in words, never the provider's internal id.
+      expect(part).toContain(`Receipt number: ${p!.receiptNumber}. Paid by Visa card ending 4242.`);
+      expect(part).not.toContain("pi_test");
     }
     expect((await headersOf(mail.id)).replyTo).toBe("quilts@riverbend.example.test");
   });

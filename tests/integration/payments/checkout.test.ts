@@ -141,7 +141,9 @@ describe("checkout for two entries and the webhook that marks them paid", () => 
     for (const part of [mail.text, mail.html]) {
       expect(part).toContain(`${a.entryNumber}, ${b.entryNumber}`);
       expect(part).toContain("Total: $60.00");
-      expect(part).toContain(`card ${intent}`);
+      // Our receipt number, never the provider's id (the card's words: fake.test.ts and entry-mails.test.ts).
+      expect(part).toContain(`Receipt number: ${s.payment!.receiptNumber}. Paid by `);
+      expect(part).not.toContain(intent);
     }
     expect(mail.html).toContain("<li>Critique fee — entry");
   });

@@ -9,7 +9,10 @@ import Stripe from "stripe";
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from "vitest";
 import { POST } from "@/app/api/payments/webhook/route";
 import { db } from "@/db/client";
-import { paymentEvents } from "@/db/schema";
+import { recordCardDetails } from "@/db/queries/payments";
+import { paymentEvents, payments } from "@/db/schema";
+import { cardWords } from "@/scoring/fees";
+import { makeShow, makeUser } from "../../helpers/factories";
 import { env } from "@/lib/env";
 import { startPaymentsFake, type PaymentsFake } from "@/scripts/fakes/payments-fake";
 
@@ -198,6 +201,31 @@ describe("payments fake: Checkout Sessions through the real SDK", () => {
     expect(event.data.object.id).toBe(s.id);
     const twice = await stripe.checkout.sessions.expire(s.id).catch((e: unknown) => e);
     expect(twice).toMatchObject({ statusCode: 400 });
+  });
+});
+
+describe("payments fake: the card of a paid session", () => {
+  it("answers the PaymentIntent and its latest Charge with the card's brand and last digits, as the API does", async () => {
+    const s = await stripe.checkout.sessions.create(sessionParams());
+    await fetch(`${fake.url}/_fake/sessions/${s.id}/complete`, { method: "POST" });
+    const paid = await stripe.checkout.sessions.retrieve(s.id);
+    const intent = await stripe.paymentIntents.retrieve(paid.payment_intent as string);
+    expect(intent).toMatchObject({ object: "payment_intent", status: "succeeded", amount: 6000, latest_charge: expect.stringMatching(/^ch_test_/) });
+    const charge = await stripe.charges.retrieve(intent.latest_charge as string);
+    expect(charge.payment_method_details?.card).toMatchObject({ brand: "visa", last4: "4242" });
+    await expect(stripe.charges.retrieve("ch_test_missing")).rejects.toMatchObject({ statusCode: 404, code: "resource_missing" });
+  });
+
+  it("recordCardDetails keeps them on our payment, for the receipt", async () => {
+    const user = await makeUser();
+    const show = await makeShow();
+    const s = await stripe.checkout.sessions.create(sessionParams());
+    await fetch(`${fake.url}/_fake/sessions/${s.id}/complete`, { method: "POST" });
+    const [p] = await db.insert(payments).values({ showId: show.id, entrantUserId: user.id, checkoutSessionId: s.id, amountCents: 6000, currency: "usd", status: "paid", paidAt: new Date() }).returning({ id: payments.id });
+    await recordCardDetails(p!.id, stripe);
+    const [row] = await db.select({ brand: payments.cardBrand, last4: payments.cardLast4 }).from(payments).where(eq(payments.id, p!.id));
+    expect(row).toEqual({ brand: "visa", last4: "4242" });
+    expect(cardWords(row!.brand, row!.last4)).toBe("Visa card ending 4242");
   });
 });
 

@@ -1,6 +1,6 @@
 // Receives the payments provider's webhook: verifies the signature over the raw body, records the
 // event once, applies it in the same transaction, and mails the receipt after the commit.
-import { applyPaymentEvent, recordPaymentEvent } from "@/db/queries/payments";
+import { applyPaymentEvent, recordCardDetails, recordPaymentEvent } from "@/db/queries/payments";
 import { sendPaymentReceiptMail } from "@/lib/entry-mails";
 import { verifyWebhook, WebhookSignatureError } from "@/lib/payments";
 import { webhookEventSchema } from "@/lib/schemas/payments";
@@ -32,6 +32,8 @@ export async function POST(req: Request): Promise<Response> {
   if (paidPaymentId) {
     // The payment is committed either way; a failed mail must not make the provider redeliver
     // (the redelivery would be a duplicate and send nothing), so log it for the show to follow up.
+    // The card's brand and last digits for the receipt; without them the receipt just says "card".
+    await recordCardDetails(paidPaymentId).catch((err: unknown) => console.error("[webhook] card details not read", { paidPaymentId, err: errorSummary(err) }));
     await sendPaymentReceiptMail(paidPaymentId).catch((err: unknown) => console.error("[webhook] receipt mail failed", { paidPaymentId, err: errorSummary(err) }));
   }
   return Response.json({ received: true, duplicate });
