@@ -1,6 +1,7 @@
 // Checks an uploaded quilt photo against a show's rules and re-encodes it as three clean JPEGs
 // (original, web, thumb) with every metadata tag removed. Pure Node: no framework, no storage.
 import sharp, { type JpegOptions, type Metadata, type OutputInfo } from "sharp";
+import { PHOTO_FORMATS, photoFormatWords } from "../lib/photo-formats";
 
 export type PhotoRules = { maxBytes: number; minWidthPx: number; minHeightPx: number };
 
@@ -110,8 +111,13 @@ async function detectType(input: Buffer): Promise<PhotoSourceType> {
 
 const SUGGESTED = "JPEG or PNG";
 
+/** The formats this server can take now, by label (lib/photo-formats.ts): HEIC only with a decoder. */
+export function acceptedPhotoFormats(): string[] {
+  return PHOTO_FORMATS.map((f) => f.label).filter((label) => label !== "HEIC" || canDecodeHeic());
+}
+
 function acceptedList(): string {
-  return canDecodeHeic() ? "JPEG, PNG, WebP or HEIC" : "JPEG, PNG or WebP";
+  return photoFormatWords(acceptedPhotoFormats());
 }
 
 function heicRefused(cause?: unknown): PhotoRejected {

@@ -6,17 +6,11 @@ import { useRef, useState } from "react";
 import { ImageUp, LoaderCircle } from "lucide-react";
 import { FieldError } from "@/components/ui/field";
 import { buttonClasses } from "@/components/ui/button";
-import { PHOTO_CONTENT_TYPES, type EntryPhotoView } from "@/lib/schemas/entry";
+import { photoFormatTypeOf, photoFormatTypes, photoFormatWords } from "@/lib/photo-formats";
+import type { EntryPhotoView } from "@/lib/schemas/entry";
 
 type Saved = EntryPhotoView & { thumbUrl?: string };
 type Phase = { kind: "idle" } | { kind: "uploading"; percent: number } | { kind: "checking" } | { kind: "error"; message: string } | { kind: "done" };
-
-const BY_EXTENSION: Record<string, string> = { jpg: "image/jpeg", jpeg: "image/jpeg", png: "image/png", webp: "image/webp", heic: "image/heic", heif: "image/heif" };
-
-function typeOf(file: File): string | null {
-  const t = file.type || BY_EXTENSION[file.name.split(".").pop()?.toLowerCase() ?? ""] || "";
-  return (PHOTO_CONTENT_TYPES as readonly string[]).includes(t) ? t : null;
-}
 
 async function messageOf(res: Response): Promise<string> {
   const body = (await res.json().catch(() => null)) as { message?: string } | null;
@@ -45,7 +39,8 @@ function post(url: string, fields: Record<string, string>, file: File, onProgres
   });
 }
 
-export function PhotoUploader({ entryId, view, label, hint, saved: initial, disabled, maxBytes }: { entryId: string; view: string; label: string; hint: string; saved: Saved | null; disabled?: boolean; maxBytes: number }) {
+export function PhotoUploader({ entryId, view, label, hint, saved: initial, disabled, maxBytes, formats }: { entryId: string; view: string; label: string; hint: string; saved: Saved | null; disabled?: boolean; maxBytes: number; formats: string[] }) {
+  const formatWords = photoFormatWords(formats);
   const [saved, setSaved] = useState<Saved | null>(initial);
   const [phase, setPhase] = useState<Phase>({ kind: "idle" });
   const inputRef = useRef<HTMLInputElement>(null);
@@ -53,8 +48,8 @@ export function PhotoUploader({ entryId, view, label, hint, saved: initial, disa
   const busy = phase.kind === "uploading" || phase.kind === "checking";
 
   async function upload(file: File) {
-    const contentType = typeOf(file);
-    if (!contentType) return setPhase({ kind: "error", message: "Choose a JPEG, PNG, WebP or HEIC photo." });
+    const contentType = photoFormatTypeOf(file, formats);
+    if (!contentType) return setPhase({ kind: "error", message: `This show takes ${formatWords} photos; choose one of those.` });
     if (file.size > maxBytes) return setPhase({ kind: "error", message: `The photo is ${(file.size / 1e6).toFixed(1)} MB; this show accepts up to ${Number((maxBytes / 1e6).toFixed(1))} MB.` });
     setPhase({ kind: "uploading", percent: 0 });
     try {
@@ -70,7 +65,7 @@ export function PhotoUploader({ entryId, view, label, hint, saved: initial, disa
     } catch (err) {
       console.error("[photo-uploader] upload failed", err);
       if (err instanceof StorageRefused) {
-        return setPhase({ kind: "error", message: `The photo store refused this file. Photos must be a JPEG, PNG, WebP or HEIC of at most ${Number((maxBytes / 1e6).toFixed(1))} MB.` });
+        return setPhase({ kind: "error", message: `The photo store refused this file. Photos must be ${formatWords} files of at most ${Number((maxBytes / 1e6).toFixed(1))} MB.` });
       }
       setPhase({ kind: "error", message: "The upload didn't finish. Check your connection and try again; your saved photo is unchanged." });
     } finally {
@@ -98,7 +93,7 @@ export function PhotoUploader({ entryId, view, label, hint, saved: initial, disa
           ref={inputRef}
           id={inputId}
           type="file"
-          accept={PHOTO_CONTENT_TYPES.join(",")}
+          accept={photoFormatTypes(formats).join(",")}
           className="peer sr-only"
           disabled={disabled || busy}
           aria-describedby={phase.kind === "error" ? `${inputId}-error` : undefined}

@@ -1,4 +1,5 @@
 // What entering costs and asks for, on a show's public page: fees, limits, photo requirements.
+import { photoFormatWords } from "@/lib/photo-formats";
 import type { ReactNode } from "react";
 import { Camera, Coins, ListChecks } from "lucide-react";
 import { formatDateTime, type DateInput } from "@/components/format/dates";
@@ -86,6 +87,7 @@ type Photos = {
   photoMinWidthPx: number;
   photoMinHeightPx: number;
   photoMaxBytes: number;
+  photoFormats: string[];
   statementWordLimit: number;
   techniques: string[];
 };
@@ -103,8 +105,8 @@ export function PhotoRules({ photos, juried }: { photos: Photos; juried: boolean
       <ul className="list-disc space-y-1 pl-6">
         {views.length ? <li>Photos needed: {views.join(" and ")}.</li> : <li>Photos are optional.</li>}
         <li>
-          Each at least {photos.photoMinWidthPx.toLocaleString("en-US")} × {photos.photoMinHeightPx.toLocaleString("en-US")} pixels, JPEG, PNG or
-          WebP, up to {mb} MB.
+          Each at least {photos.photoMinWidthPx.toLocaleString("en-US")} × {photos.photoMinHeightPx.toLocaleString("en-US")} pixels, {photoFormatWords(photos.photoFormats)},
+          up to {mb} MB.
         </li>
         {juried ? <li>This show is juried: the committee accepts entries from their photos.</li> : null}
         <li>{photos.statementWordLimit > 0 ? `A statement about your quilt of up to ${photos.statementWordLimit} words.` : "No statement is asked for."}</li>

@@ -22,6 +22,7 @@ import {
   type StatusChangeInput,
 } from "@/lib/schemas/settings";
 import { requireShowRole, type Viewer } from "@/lib/session";
+import { acceptedPhotoFormats } from "@/storage/photo-processing";
 
 /** What a show without a settings row uses; mirrors the column defaults in db/schema/settings.ts. */
 export const DEFAULT_SETTINGS = {
@@ -61,6 +62,8 @@ export type EffectiveSettings = typeof DEFAULT_SETTINGS & {
   saved: boolean;
   updatedAt: Date | null;
   currentRules: CurrentRules | null;
+  /** The photo formats taken, by label ("JPEG", "PNG", …), named the same on every screen. */
+  photoFormats: string[];
 };
 
 const settingsColumns = {
@@ -118,11 +121,13 @@ export async function currentRulesFor(reader: Reader, showId: string): Promise<C
 export async function settingsForShowId(showId: string, reader: Reader = db): Promise<EffectiveSettings> {
   const [row] = await reader.select(settingsColumns).from(showSettings).where(eq(showSettings.showId, showId)).limit(1);
   const currentRules = await currentRulesFor(reader, showId);
-  if (!row) return { ...DEFAULT_SETTINGS, requiredPhotoViews: [...DEFAULT_SETTINGS.requiredPhotoViews], techniques: [...DEFAULT_SETTINGS.techniques], quickPhrases: [], judgeFields: [...DEFAULT_SETTINGS.judgeFields], showId, saved: false, updatedAt: null, currentRules };
+  // The photo formats every screen and message names: one list (lib/photo-formats.ts).
+  const photoFormats = acceptedPhotoFormats();
+  if (!row) return { ...DEFAULT_SETTINGS, requiredPhotoViews: [...DEFAULT_SETTINGS.requiredPhotoViews], techniques: [...DEFAULT_SETTINGS.techniques], quickPhrases: [], judgeFields: [...DEFAULT_SETTINGS.judgeFields], showId, saved: false, updatedAt: null, currentRules, photoFormats };
   const { updatedAt, categoryOverlap, commentPolicy, ...values } = row;
   const overlap = categoryOverlap === "firstByPrecedence" ? "firstByPrecedence" : "flag";
   const policy = commentPolicy === "placed" || commentPolicy === "none" ? commentPolicy : "all";
-  return { ...values, categoryOverlap: overlap, commentPolicy: policy, showId, saved: true, updatedAt, currentRules };
+  return { ...values, categoryOverlap: overlap, commentPolicy: policy, showId, saved: true, updatedAt, currentRules, photoFormats };
 }
 
 // ── Reading ─────────────────────────────────────────────────────────────────────────────────────
@@ -158,6 +163,7 @@ export async function publicShowDetails(slug: string) {
       photoMinWidthPx: s.photoMinWidthPx,
       photoMinHeightPx: s.photoMinHeightPx,
       photoMaxBytes: s.photoMaxBytes,
+      photoFormats: s.photoFormats,
       statementWordLimit: s.statementWordLimit,
       techniques: s.techniques,
     },

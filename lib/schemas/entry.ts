@@ -4,6 +4,7 @@
 // and cents for the database.
 import { z } from "zod";
 import { INT4_MAX, storableString } from "@/lib/validation";
+import { PHOTO_FORMATS, photoFormatWords } from "@/lib/photo-formats";
 import { countWords } from "@/scoring/entry-completeness";
 import { parseLength, type LengthUnit } from "@/scoring/measure";
 
@@ -169,10 +170,11 @@ export const submitActionSchema = submitSchema.extend({ entryId: id });
 export const PHOTO_VIEWS = ["full", "detail", "other"] as const;
 export type PhotoView = (typeof PHOTO_VIEWS)[number];
 export const PHOTO_CONTENT_TYPES = ["image/jpeg", "image/png", "image/webp", "image/heic", "image/heif"] as const;
+const ALL_PHOTO_FORMATS = photoFormatWords(PHOTO_FORMATS.map((f) => f.label));
 
 export const presignPhotoSchema = z.object({
   view: z.enum(PHOTO_VIEWS, "Choose which view this photo is."),
-  contentType: z.enum(PHOTO_CONTENT_TYPES, "Upload a JPEG, PNG, WebP or HEIC photo."),
+  contentType: z.enum(PHOTO_CONTENT_TYPES, `Upload a ${ALL_PHOTO_FORMATS} photo.`),
   bytes: z.number().int().positive("The file is empty.").max(INT4_MAX, "That file is too large."),
 });
 export const attachPhotoSchema = z.object({ uploadKey: storableString().min(1).max(300) });

@@ -4,6 +4,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { ArrowLeft, ArrowRight } from "lucide-react";
+import { photoFormatWords } from "@/lib/photo-formats";
 import { AboutStep } from "@/components/entries/entry-form/about-step";
 import { MakersStep } from "@/components/entries/entry-form/makers-step";
 import { QuiltStep } from "@/components/entries/entry-form/quilt-step";
@@ -147,7 +148,7 @@ function StepBody({ data, step, back, next, category }: { data: EntryForForm; st
     return (
       <div className="space-y-5">
         <p className="text-ink-muted">
-          JPEG, PNG, WebP or HEIC, at least {settings.photoMinWidthPx} × {settings.photoMinHeightPx} pixels and up to {Number((settings.photoMaxBytes / 1e6).toFixed(1))} MB each. Each photo is saved as soon as it is checked; location and camera details are removed.
+          {photoFormatWords(settings.photoFormats)}, at least {settings.photoMinWidthPx} × {settings.photoMinHeightPx} pixels and up to {Number((settings.photoMaxBytes / 1e6).toFixed(1))} MB each. Each photo is saved as soon as it is checked; location and camera details are removed.
         </p>
         {views.map((v) => {
           const saved = data.photos.find((p) => p.view === v) ?? null;
@@ -160,6 +161,7 @@ function StepBody({ data, step, back, next, category }: { data: EntryForForm; st
               hint={PHOTO_HINTS[v] ?? ""}
               saved={saved ? { ...saved, ...photoUrls(saved.id) } : null}
               maxBytes={settings.photoMaxBytes}
+              formats={settings.photoFormats}
             />
           );
         })}
