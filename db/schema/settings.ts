@@ -16,12 +16,16 @@ export const showSettings = pgTable("show_settings", {
   memberEntryFeeCents: integer().notNull().default(0),
   lateFeeCents: integer().notNull().default(0),
   critiqueFeeCents: integer().notNull().default(0),
+  /** Members' e-mail addresses, kept by the chair (lower case); when any are listed, only they pay the member rate. */
+  memberEmails: text().array().notNull().default(sql`'{}'::text[]`),
   /** Most one entrant pays in entry fees (late and critique fees come on top); null = no cap. */
   feeCapCents: integer(),
   /** Share of the entry fee refunded on withdrawal before entries close, in percent. */
   withdrawalRefundPercent: integer().notNull().default(100),
   currency: text().notNull().default("usd"),
   maxEntriesPerEntrant: integer(),
+  /** Smallest side a quilt may have at this show (µm; 25,400 = 1 in); null = no minimum. */
+  minQuiltSideUm: integer(),
   maxEntriesPerCategory: integer(),
   /** Total entries the show accepts; later ones go to the waiting list. */
   capacity: integer(),
