@@ -12,7 +12,7 @@
 //   (late fee by today's date), counted as due and outstanding.
 // The per-entrant cap counts entry fees for entries still in the show, card and offline alike,
 // in entry-number order.
-import { isGuildMember, quoteFees, type FeeEntry, type FeeKind, type FeeSchedule } from "../scoring/fees";
+import { isMember, quoteFees, type FeeEntry, type FeeKind, type FeeSchedule } from "../scoring/fees";
 
 export type AccountEntry = {
   id: string;
@@ -65,7 +65,7 @@ export type EntrantRow = Omit<EntrantFacts, "entries" | "payments"> & {
   refundToCheck: (number | string)[];
 };
 
-export type AccountContext = { schedule: FeeSchedule; showGuildName: string; now: Date };
+export type AccountContext = { schedule: FeeSchedule; showGuildName: string; now: Date; memberEmails?: readonly string[] };
 
 const CHARGED = new Set<AccountPayment["status"]>(["paid", "partially_refunded", "refunded"]);
 const OUT_OF_SHOW = new Set(["draft", "withdrawn", "declined"]);
@@ -127,7 +127,7 @@ function declinedUnrefunded(facts: Pick<EntrantFacts, "entries" | "payments">): 
 }
 
 export function entrantAccount(facts: EntrantFacts, ctx: AccountContext): EntrantRow {
-  const member = isGuildMember(facts.guild, ctx.showGuildName);
+  const member = isMember({ email: facts.email, guild: facts.guild }, { guildName: ctx.showGuildName, memberEmails: ctx.memberEmails ?? [] });
   const { card, sorted, offline, offlineCents, capCountedCents: capCounted } = takenSoFar(facts, { schedule: ctx.schedule, member });
   const owing = sorted.filter((e) => !OUT_OF_SHOW.has(e.status) && !e.waitlisted && !e.paidAt);
 

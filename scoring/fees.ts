@@ -45,12 +45,36 @@ export type FeeQuote = {
 };
 
 /**
- * Membership rule: the entrant is a member when the guild named in their profile equals the
- * show's guild name, ignoring case and surrounding spaces. An empty guild is never a member.
+ * Membership rule. When the chair keeps a member list (e-mail addresses), a member is an entrant
+ * whose account e-mail is on it. With no list, the show goes by the guild named in the entrant's
+ * profile: the same name as the show's guild, capitals and spaces around it aside. An empty guild
+ * is never a member.
  */
+export function isMember(
+  entrant: { email: string; guild: string | null | undefined },
+  show: { guildName: string; memberEmails: readonly string[] },
+): boolean {
+  if (show.memberEmails.length > 0) return show.memberEmails.includes(entrant.email.trim().toLowerCase());
+  return isGuildMember(entrant.guild, show.guildName);
+}
+
+/** The guild-name rule alone (see isMember). */
 export function isGuildMember(profileGuild: string | null | undefined, showGuildName: string): boolean {
   const mine = (profileGuild ?? "").trim().toLowerCase();
   return mine !== "" && mine === showGuildName.trim().toLowerCase();
+}
+
+/** What the Pay box says about the member rate, in plain words. */
+export function memberRateWords(input: { member: boolean; guildName: string; memberList: boolean; memberFee: string }): string {
+  const { member, guildName, memberList, memberFee } = input;
+  if (member) {
+    return memberList
+      ? `Member rate: your e-mail address is on ${guildName}'s member list.`
+      : `Member rate: your profile says you belong to ${guildName}.`;
+  }
+  return memberList
+    ? `Members of ${guildName} pay ${memberFee} per entry. The show keeps a list of its members' e-mail addresses; if you are a member and yours isn't on it, ask the show chair.`
+    : `Members of ${guildName} pay ${memberFee} per entry: put ${guildName} as your guild on your Account page.`;
 }
 
 /** The late fee applies strictly after `lateFeeFromAt`. */

@@ -7,7 +7,7 @@ import { startCheckoutAction } from "@/app/(entrant)/my/actions";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { CheckboxField } from "@/components/ui/field";
-import { formatMoney, quoteFees } from "@/scoring/fees";
+import { formatMoney, memberRateWords, quoteFees } from "@/scoring/fees";
 
 export type PayEntriesProps = {
   showSlug: string;
@@ -15,6 +15,8 @@ export type PayEntriesProps = {
   guildName: string;
   currency: string;
   member: boolean;
+  /** The chair keeps a list of members' e-mails (else the guild in the profile decides). */
+  memberList: boolean;
   entryFeesAlreadyPaidCents: number;
   schedule: {
     entryFeeCents: number;
@@ -108,11 +110,9 @@ export function PayEntries(props: PayEntriesProps) {
       ) : null}
 
       <ul className="list-disc space-y-1 pl-5 text-sm text-ink-muted">
-        <li>
-          {props.member
-            ? `Member rate: the guild in your profile matches this show's guild, ${props.guildName}.`
-            : `Non-member rate. Members of ${props.guildName} (the guild named in your profile matches, ignoring capitals) pay ${money(schedule.memberEntryFeeCents)} per entry.`}
-        </li>
+        {schedule.memberEntryFeeCents !== schedule.entryFeeCents ? (
+          <li>{memberRateWords({ member: props.member, guildName: props.guildName, memberList: props.memberList, memberFee: money(schedule.memberEntryFeeCents) })}</li>
+        ) : null}
         {schedule.feeCapCents !== null ? (
           <li>
             Entry fees stop at {money(schedule.feeCapCents)} per entrant at this show; late and critique fees come on top.

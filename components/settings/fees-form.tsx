@@ -4,11 +4,11 @@ import { Save } from "lucide-react";
 import { ActionForm, useActionForm } from "@/components/forms/action-form";
 import type { ActionResult } from "@/lib/action";
 import { Button } from "@/components/ui/button";
-import { TextField } from "@/components/ui/field";
+import { TextareaField, TextField } from "@/components/ui/field";
 import { feesSchema, type FeesFormValues } from "@/lib/schemas/settings";
 import { updateSettingsAction } from "@/app/(chair)/shows/[slug]/manage/settings/actions";
 
-type Text = Exclude<keyof FeesFormValues, "section">;
+type Text = Exclude<keyof FeesFormValues, "section" | "memberEmails">;
 
 export function FeesForm({ showSlug, values }: { showSlug: string; values: FeesFormValues }) {
   const ctl = useActionForm({
@@ -36,6 +36,14 @@ export function FeesForm({ showSlug, values }: { showSlug: string; values: FeesF
           {...register("withdrawalRefundPercent")}
         />
       </div>
+      <TextareaField
+        label="Members’ e-mail addresses"
+        hint="One per line. When the list has any, only these entrants pay the member fee (by their account e-mail). Leave it empty to go by the guild entrants name in their profile."
+        rows={5}
+        optional
+        error={ctl.errorOf("memberEmails")}
+        {...register("memberEmails")}
+      />
       <Button type="submit" pending={ctl.pending} pendingLabel="Saving…" icon={<Save aria-hidden className="size-5" />}>
         Save fees
       </Button>

@@ -16,6 +16,8 @@ type Settings = {
   memberEntryFeeCents: number;
   lateFeeCents: number;
   critiqueFeeCents: number;
+  memberEmails: string[];
+  minQuiltSideUm: number | null;
   feeCapCents: number | null;
   withdrawalRefundPercent: number;
   maxEntriesPerEntrant: number | null;
@@ -51,6 +53,7 @@ export function feesFormValues(s: Settings): FeesFormValues {
     critiqueFeeCents: centsToInput(s.critiqueFeeCents),
     feeCapCents: centsToInput(s.feeCapCents),
     withdrawalRefundPercent: String(s.withdrawalRefundPercent),
+    memberEmails: s.memberEmails.join("\n"),
   };
 }
 

@@ -75,7 +75,7 @@ export async function myEntriesByShow(viewer: Viewer, now = new Date()) {
     [...byShow.values()].map(async (list) => {
       const s = list[0]!;
       const settings = await settingsForShowId(s.showId);
-      const member = await memberAt(db, viewer.id, s.guildName);
+      const member = await memberAt(db, viewer.id, { guildName: s.guildName, memberEmails: settings.memberEmails });
       const withdrawOpen = entrantMayWithdraw({ status: s.showStatus, entryClosesAt: s.entryClosesAt }, now);
       const critiquePaid = await critiqueLinesPaid(db, list.map((e) => e.id));
       const shaped = await Promise.all(
@@ -125,6 +125,7 @@ export async function myEntriesByShow(viewer: Viewer, now = new Date()) {
         },
         currency: settings.currency,
         critiqueFeeCents: settings.critiqueFeeCents,
+        memberList: settings.memberEmails.length > 0,
         juried: settings.juried,
         refundPercent: settings.withdrawalRefundPercent,
         schedule: scheduleOf(settings),

@@ -59,6 +59,6 @@ export async function entrantsForExport(viewer: Viewer, showSlug: string, now: D
     entries: accounts.entries.get(p.id) ?? [],
     payments: accounts.payments.get(p.id) ?? [],
   }));
-  const rows = entrantAccounts(all, { schedule: scheduleOf(settings), showGuildName: facts!.guildName, now });
+  const rows = entrantAccounts(all, { schedule: scheduleOf(settings), showGuildName: facts!.guildName, memberEmails: settings.memberEmails, now });
   return { show: { slug: show.slug, name: show.name, timeZone: facts!.timeZone, currency: settings.currency }, rows };
 }

@@ -12,13 +12,13 @@ import type Stripe from "stripe";
 import { db, type Tx } from "@/db/client";
 import { writeAudit } from "@/db/queries/audit";
 import { settingsForShowId } from "@/db/queries/settings";
-import { entrantProfiles, entries, paymentEvents, paymentItems, payments, shows } from "@/db/schema";
+import { entrantProfiles, entries, paymentEvents, paymentItems, payments, shows, user } from "@/db/schema";
 import { env } from "@/lib/env";
 import { badInput, conflict, notFound } from "@/lib/errors";
 import { stripe } from "@/lib/payments";
 import type { Viewer } from "@/lib/session";
 import { takenSoFar, type AccountEntry, type AccountPayment } from "@/exports/entrant-accounts";
-import { critiqueFeeDue, isGuildMember, quoteFees, type FeeSchedule } from "@/scoring/fees";
+import { critiqueFeeDue, isMember, quoteFees, type FeeSchedule } from "@/scoring/fees";
 
 /** Entry statuses in which a critique fee asked for after paying can still be paid (before intake). */
 export const CRITIQUE_PAYABLE = new Set(["paid", "accepted"]);
@@ -64,9 +64,15 @@ async function showBySlug(reader: Pick<Tx, "select">, slug: string): Promise<Sho
   return show;
 }
 
-async function memberAt(reader: Pick<Tx, "select">, userId: string, guildName: string): Promise<boolean> {
-  const [profile] = await reader.select({ guild: entrantProfiles.guild }).from(entrantProfiles).where(eq(entrantProfiles.userId, userId)).limit(1);
-  return isGuildMember(profile?.guild, guildName);
+/** Whether the entrant pays the member rate at the show (the rule: isMember in scoring/fees.ts). */
+async function memberAt(reader: Pick<Tx, "select">, userId: string, show: { guildName: string; memberEmails: readonly string[] }): Promise<boolean> {
+  const [row] = await reader
+    .select({ email: user.email, guild: entrantProfiles.guild })
+    .from(user)
+    .leftJoin(entrantProfiles, eq(entrantProfiles.userId, user.id))
+    .where(eq(user.id, userId))
+    .limit(1);
+  return row ? isMember(row, show) : false;
 }
 
 /**
@@ -190,7 +196,7 @@ export async function startCheckout(viewer: Viewer, input: { showSlug: string; e
     }
     await expireOpenPaymentsFor(tx, viewer.id, ids);
 
-    const member = await memberAt(tx, viewer.id, show.guildName);
+    const member = await memberAt(tx, viewer.id, { guildName: show.guildName, memberEmails: settings.memberEmails });
     const quote = quoteFees({
       schedule: scheduleOf(settings),
       member,

@@ -31,10 +31,12 @@ export const DEFAULT_SETTINGS = {
   memberEntryFeeCents: 0,
   lateFeeCents: 0,
   critiqueFeeCents: 0,
+  memberEmails: [] as string[],
   feeCapCents: null as number | null,
   withdrawalRefundPercent: 100,
   currency: "usd",
   maxEntriesPerEntrant: null as number | null,
+  minQuiltSideUm: null as number | null,
   maxEntriesPerCategory: null as number | null,
   capacity: null as number | null,
   requiredPhotoViews: ["full", "detail"] as string[],
@@ -72,10 +74,12 @@ const settingsColumns = {
   memberEntryFeeCents: showSettings.memberEntryFeeCents,
   lateFeeCents: showSettings.lateFeeCents,
   critiqueFeeCents: showSettings.critiqueFeeCents,
+  memberEmails: showSettings.memberEmails,
   feeCapCents: showSettings.feeCapCents,
   withdrawalRefundPercent: showSettings.withdrawalRefundPercent,
   currency: showSettings.currency,
   maxEntriesPerEntrant: showSettings.maxEntriesPerEntrant,
+  minQuiltSideUm: showSettings.minQuiltSideUm,
   maxEntriesPerCategory: showSettings.maxEntriesPerCategory,
   capacity: showSettings.capacity,
   requiredPhotoViews: showSettings.requiredPhotoViews,
@@ -123,7 +127,7 @@ export async function settingsForShowId(showId: string, reader: Reader = db): Pr
   const currentRules = await currentRulesFor(reader, showId);
   // The photo formats every screen and message names: one list (lib/photo-formats.ts).
   const photoFormats = acceptedPhotoFormats();
-  if (!row) return { ...DEFAULT_SETTINGS, requiredPhotoViews: [...DEFAULT_SETTINGS.requiredPhotoViews], techniques: [...DEFAULT_SETTINGS.techniques], quickPhrases: [], judgeFields: [...DEFAULT_SETTINGS.judgeFields], showId, saved: false, updatedAt: null, currentRules, photoFormats };
+  if (!row) return { ...DEFAULT_SETTINGS, requiredPhotoViews: [...DEFAULT_SETTINGS.requiredPhotoViews], techniques: [...DEFAULT_SETTINGS.techniques], memberEmails: [], quickPhrases: [], judgeFields: [...DEFAULT_SETTINGS.judgeFields], showId, saved: false, updatedAt: null, currentRules, photoFormats };
   const { updatedAt, categoryOverlap, commentPolicy, ...values } = row;
   const overlap = categoryOverlap === "firstByPrecedence" ? "firstByPrecedence" : "flag";
   const policy = commentPolicy === "placed" || commentPolicy === "none" ? commentPolicy : "all";

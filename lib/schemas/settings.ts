@@ -153,6 +153,26 @@ export type DatesFormValues = z.input<typeof datesSchema>;
 
 // ── Fees, limits, photos, options: each section is saved on its own ─────────────────────────────
 
+/** Members' e-mail addresses, one per line (or separated by commas), kept lower case and once each. */
+const memberEmailList = z
+  .string()
+  .max(200_000, "Members' e-mail addresses: that list is too long.")
+  .optional()
+  .transform((v, ctx) => {
+    if (v === undefined) return undefined;
+    const list = [...new Set(v.split(/[\s,;]+/).map((e) => e.trim().toLowerCase()).filter(Boolean))];
+    const bad = list.find((e) => e.length > 254 || !z.email().safeParse(e).success);
+    if (bad) {
+      ctx.addIssue({ code: "custom", message: `Members' e-mail addresses: "${bad.slice(0, 60)}" is not an e-mail address.` });
+      return z.NEVER;
+    }
+    if (list.length > 5000) {
+      ctx.addIssue({ code: "custom", message: "Members' e-mail addresses: list at most 5,000." });
+      return z.NEVER;
+    }
+    return list;
+  });
+
 export const feesSchema = z
   .object({
     section: z.literal("fees"),
@@ -162,6 +182,7 @@ export const feesSchema = z
     critiqueFeeCents: money("Critique fee"),
     feeCapCents: optionalMoney("Fee cap per entrant"),
     withdrawalRefundPercent: wholeNumber("Refund on withdrawal", 0, 100),
+    memberEmails: memberEmailList,
   })
   .superRefine((f, ctx) => {
     if (f.memberEntryFeeCents > f.entryFeeCents) {
@@ -170,7 +191,9 @@ export const feesSchema = z
     if (f.feeCapCents !== null && f.feeCapCents < Math.max(f.entryFeeCents, f.memberEntryFeeCents)) {
       ctx.addIssue({ code: "custom", path: ["feeCapCents"], message: "Fee cap per entrant: the cap can't be less than one entry fee; leave it blank for no cap." });
     }
-  });
+  })
+  // A save without the list (an older form, a script) leaves the saved list alone.
+  .transform(({ memberEmails, ...rest }) => (memberEmails === undefined ? rest : { ...rest, memberEmails }));
 
 export const limitsSchema = z.object({
   section: z.literal("limits"),

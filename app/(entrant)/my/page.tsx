@@ -91,6 +91,7 @@ function ShowGroup({ group }: { group: MyShow }) {
           guildName={show.guildName}
           currency={group.currency}
           member={group.member}
+          memberList={group.memberList}
           entryFeesAlreadyPaidCents={group.entryFeesAlreadyPaidCents}
           schedule={{ ...group.schedule, lateFeeFromAt: group.schedule.lateFeeFromAt?.toISOString() ?? null }}
           entries={payable.map((e) => ({ id: e.id, entryNumber: e.entryNumber, title: e.title, critiqueRequested: e.critiqueRequested, critiqueOnly: e.critiqueDue }))}
