@@ -1,8 +1,9 @@
 // Where to go after signing in: only a path on this site. "//evil.example", "/\evil" and full
 // URLs are refused, so a crafted link cannot bounce someone to another site (open redirect).
+// With no `next`, /start sends each person where their role at a current show calls for.
 const BASE = "http://ribbonry.invalid";
 
-export function safeNext(raw: unknown, fallback = "/my"): string {
+export function safeNext(raw: unknown, fallback = "/start"): string {
   const value = Array.isArray(raw) ? raw[0] : raw;
   if (typeof value !== "string" || value.length > 500) return fallback;
   if (!value.startsWith("/") || value.startsWith("//") || value.startsWith("/\\")) return fallback;

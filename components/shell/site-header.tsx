@@ -21,6 +21,7 @@ export function SiteHeader({ nav }: { nav: ShellNav }) {
   // Signed out, the bar offers "Sign in" only; "Create an account" waits in the drawer and on pages.
   const links = nav.user ? nav.personal.filter((l) => l.icon !== "account") : nav.personal.filter((l) => l.icon === "signIn");
   const account = nav.personal.find((l) => l.icon === "account");
+  const myEntries = nav.user ? nav.personal.find((l) => l.icon === "entries") : undefined;
   return (
     <header data-site-header className="on-dark sticky top-0 z-30 bg-plum-900 text-paper-100 shadow-[0_1px_0_var(--color-plum-700)]">
       <div className="container-page flex min-h-16 items-center gap-2 py-2">
@@ -61,7 +62,14 @@ export function SiteHeader({ nav }: { nav: ShellNav }) {
           </div>
         ) : null}
 
-        <div className="ml-auto md:hidden">
+        <div className="ml-auto flex items-center gap-1 md:hidden">
+          {myEntries ? (
+            // My entries stays one tap away on phones too, wherever signing in landed.
+            <Link href={myEntries.href} aria-current={isActive(pathname, myEntries.href) ? "page" : undefined} className={cx(barLink, "min-w-tap justify-center px-2")}>
+              <NavIcon name="entries" className="size-6 shrink-0 text-gold-300" />
+              <span className="sr-only">{myEntries.label}</span>
+            </Link>
+          ) : null}
           <MobileNav nav={nav} />
         </div>
       </div>
