@@ -1,5 +1,6 @@
 // Saved settings → the text each settings form starts from (the reverse of lib/schemas/settings).
 import { utcToZonedInput } from "@/components/format/zoned-time";
+import { formatForInput } from "@/scoring/measure";
 import {
   centsToInput,
   DATE_FIELDS,
@@ -58,7 +59,13 @@ export function feesFormValues(s: Settings): FeesFormValues {
 }
 
 export function limitsFormValues(s: Settings): LimitsFormValues {
-  return { section: "limits", maxEntriesPerEntrant: count(s.maxEntriesPerEntrant), maxEntriesPerCategory: count(s.maxEntriesPerCategory), capacity: count(s.capacity) };
+  return {
+    section: "limits",
+    maxEntriesPerEntrant: count(s.maxEntriesPerEntrant),
+    maxEntriesPerCategory: count(s.maxEntriesPerCategory),
+    capacity: count(s.capacity),
+    minQuiltSideUm: s.minQuiltSideUm === null ? "" : formatForInput(s.minQuiltSideUm, "in"),
+  };
 }
 
 export function photosFormValues(s: Settings): PhotosFormValues {

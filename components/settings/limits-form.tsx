@@ -15,7 +15,7 @@ export function LimitsForm({ showSlug, values }: { showSlug: string; values: Lim
     action: (): Promise<ActionResult> => updateSettingsAction(null, { ...ctl.form.getValues(), showSlug }),
   });
   const { register } = ctl.form;
-  const count = (name: Exclude<keyof LimitsFormValues, "section">) => ({ inputMode: "numeric" as const, optional: true, error: ctl.errorOf(name), ...register(name) });
+  const count = (name: Exclude<keyof LimitsFormValues, "section" | "minQuiltSideUm">) => ({ inputMode: "numeric" as const, optional: true, error: ctl.errorOf(name), ...register(name) });
   return (
     <ActionForm controller={ctl} aria-labelledby="limits">
       <p className="text-ink-muted">Leave a box blank for no limit.</p>
@@ -24,6 +24,16 @@ export function LimitsForm({ showSlug, values }: { showSlug: string; values: Lim
         <TextField label="Per entrant in one category" {...count("maxEntriesPerCategory")} />
         <TextField label="Total capacity" hint="Entries beyond it go to the waiting list." {...count("capacity")} />
       </div>
+      <TextField
+        label="Smallest quilt side (inches)"
+        hint="A quilt with a side shorter than this is refused when entered, e.g. 12. Blank: no minimum."
+        inputMode="decimal"
+        autoComplete="off"
+        optional
+        className="sm:max-w-xs"
+        error={ctl.errorOf("minQuiltSideUm")}
+        {...register("minQuiltSideUm")}
+      />
       <Button type="submit" pending={ctl.pending} pendingLabel="Saving…" icon={<Save aria-hidden className="size-5" />}>
         Save limits
       </Button>

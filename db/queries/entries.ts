@@ -18,6 +18,7 @@ import type { aboutStepSchema, makersStepSchema, quiltStepSchema } from "@/lib/s
 import type { Viewer } from "@/lib/session";
 import { entryGaps, UNSET_LENGTH_UM, type Gap } from "@/scoring/entry-completeness";
 import { errorSummary } from "@/lib/error-log";
+import { belowShowMinimum } from "@/scoring/quilt-size";
 
 /** Entries that hold one of the entrant's places (the per-entrant limit). */
 const NOT_COUNTED_FOR_ENTRANT = ["draft", "withdrawn"] as const;
@@ -149,7 +150,10 @@ function columnsFor({ step, input }: StepInput, settings: EffectiveSettings): Pa
   if (step === "quilt") {
     const unknown = input.techniques.filter((t) => !settings.techniques.includes(t));
     if (unknown.length) throw badInput("Some fields need attention.", { techniques: [`This show doesn't list ${unknown.join(", ")}; choose from its techniques.`] });
-    return { title: input.title, sizeUnit: input.sizeUnit, ...quiltSizeUm(input), techniques: [...new Set(input.techniques)] };
+    const size = quiltSizeUm(input);
+    const below = belowShowMinimum(size, settings.minQuiltSideUm);
+    if (below) throw badInput(below, { width: [below] });
+    return { title: input.title, sizeUnit: input.sizeUnit, ...size, techniques: [...new Set(input.techniques)] };
   }
   if (step === "makers") {
     return {

@@ -3,6 +3,7 @@
 // counts and instants' wall-clock text, with a message naming the field when it can't.
 import { z } from "zod";
 import { storableString } from "@/lib/validation";
+import { parseLength } from "@/scoring/measure";
 
 // ── Money: "25", "25.00", "$25", "1,250.50" → integer cents, by integer arithmetic only ─────────
 
@@ -195,11 +196,29 @@ export const feesSchema = z
   // A save without the list (an older form, a script) leaves the saved list alone.
   .transform(({ memberEmails, ...rest }) => (memberEmails === undefined ? rest : { ...rest, memberEmails }));
 
+/** "12" or "12.5" inches → µm; blank = no minimum. */
+const smallestSide = z
+  .string()
+  .max(40)
+  .optional()
+  .transform((v, ctx): number | null | undefined => {
+    if (v === undefined) return undefined;
+    const s = v.trim();
+    if (s === "") return null;
+    const parsed = parseLength(s, "in");
+    if (!parsed.ok || parsed.um > 100 * 25_400) {
+      ctx.addIssue({ code: "custom", message: "Smallest quilt side: enter inches from 1 to 100, e.g. 12 or 12.5, or leave it blank." });
+      return z.NEVER;
+    }
+    return parsed.um;
+  });
+
 export const limitsSchema = z.object({
   section: z.literal("limits"),
   maxEntriesPerEntrant: wholeNumber("Entries per entrant", 1, 1000, true),
   maxEntriesPerCategory: wholeNumber("Entries per entrant in one category", 1, 1000, true),
   capacity: wholeNumber("Total capacity", 1, 100_000, true),
+  minQuiltSideUm: smallestSide,
 });
 
 export const PHOTO_VIEWS = ["full", "detail"] as const;

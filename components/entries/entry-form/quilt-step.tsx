@@ -6,12 +6,13 @@ import { SizeField } from "@/components/entries/size-field";
 import { CategoryPreview, type CategoryContext } from "@/components/entries/category-preview";
 import { saveQuiltAction } from "@/app/(entrant)/entries/[id]/actions";
 import { quiltStepSchema, type QuiltStepInput } from "@/lib/schemas/entry";
+import { SizeWarnings } from "@/components/entries/size-warnings";
 import { StepButtons } from "./step-buttons";
 import { useStepForm } from "./use-step-form";
 
-type Props = { entryId: string; defaults: QuiltStepInput; techniques: string[]; nextHref: string; category: CategoryContext };
+type Props = { entryId: string; defaults: QuiltStepInput; techniques: string[]; nextHref: string; category: CategoryContext; minSideUm: number | null };
 
-export function QuiltStep({ entryId, defaults, techniques, nextHref, category }: Props) {
+export function QuiltStep({ entryId, defaults, techniques, nextHref, category, minSideUm }: Props) {
   const { ctl, setIntent } = useStepForm({
     schema: quiltStepSchema,
     defaultValues: defaults,
@@ -24,6 +25,7 @@ export function QuiltStep({ entryId, defaults, techniques, nextHref, category }:
     <ActionForm controller={ctl} aria-label="The quilt">
       <TextField label="Title" autoComplete="off" maxLength={120} hint="As it should appear on the label." error={ctl.errorOf("title")} {...register("title")} />
       <SizeField form={ctl.form} errorOf={ctl.errorOf} />
+      <SizeWarnings widthText={watch("width") ?? ""} lengthText={watch("length") ?? ""} unit={watch("sizeUnit") === "cm" ? "cm" : "in"} minSideUm={minSideUm} categories={category.categories} />
       <CategoryPreview
         context={category}
         widthText={watch("width") ?? ""}

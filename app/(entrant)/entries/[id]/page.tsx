@@ -115,7 +115,7 @@ function StepBody({ data, step, back, next, category }: { data: EntryForForm; st
     };
     // Techniques the chair has since removed stay visible while the entry still has them.
     const techniques = [...new Set([...settings.techniques, ...e.techniques])];
-    return <QuiltStep entryId={e.id} defaults={defaults} techniques={techniques} nextHref={next} category={category!.context} />;
+    return <QuiltStep entryId={e.id} defaults={defaults} techniques={techniques} nextHref={next} category={category!.context} minSideUm={settings.minQuiltSideUm} />;
   }
   if (step === "makers") {
     const defaults = {
