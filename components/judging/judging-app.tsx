@@ -10,6 +10,7 @@ import { dismissRow, localDb, recordChange, setMeta, sheetId, type SessionPayloa
 import { EntryView } from "./entry-view";
 import { EntryQueue } from "./entry-queue";
 import { JudgePicker } from "./judge-picker";
+import { judgingOrder } from "./queue-groups";
 import { viewSheet, type LocalChange, type SheetView, type SyncState } from "./outbox";
 import { SyncBadge } from "./sync-badge";
 import { useJudgingSession } from "./use-session";
@@ -68,7 +69,8 @@ export function JudgingApp({ slug, notOnPanel }: { slug: string; notOnPanel?: Re
   const overall: SyncState = mine.some((v) => v.sync === "conflict") ? "conflict" : mine.some((v) => v.sync === "refused") ? "refused" : rows.value.some((r) => r.state === "pending") ? "saved" : "synced";
   const pending = rows.value.filter((r) => r.state === "pending").length;
   const entry = entries.find((e) => e.id === place.value.entry);
-  const next = entry ? entries[entries.indexOf(entry) + 1] : undefined;
+  const ordered = judgingOrder(session, entries);
+  const next = entry ? ordered[ordered.indexOf(entry) + 1] : undefined;
   const scribing = judge && judge.id !== session.me.id;
 
   return (

@@ -18,7 +18,8 @@ export type SessionPayload = {
   commentPolicy: "all" | "placed" | "none";
   quickPhrases: string[];
   sheets: { id: string; name: string; sheet: import("@/scoring/score-sheets").ScoreSheet }[];
-  categories: { id: string; code: string; name: string; method: "points" | "sort_then_points" | "sort_then_rank" | "rank"; sheetId: string | null }[];
+  /** `precedence` and `sessionId` (the panel judging it) order the list; a copy saved before they existed lacks them. */
+  categories: { id: string; code: string; name: string; method: "points" | "sort_then_points" | "sort_then_rank" | "rank"; sheetId: string | null; precedence?: number; sessionId?: string | null }[];
   entries: SessionEntry[];
   states: (ServerSheet & { sheetRowId: string | null })[];
 };

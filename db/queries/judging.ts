@@ -5,7 +5,7 @@ import "server-only";
 import { judgedEntries } from "@/db/queries/judged-entries";
 import { and, asc, eq, inArray, sql } from "drizzle-orm";
 import { db, type Tx } from "@/db/client";
-import { categories, entries, entryPhotos, judgeSheets, scoreChanges, scoreSheets, user } from "@/db/schema";
+import { categories, entries, entryPhotos, judgeSheets, panelCategories, scoreChanges, scoreSheets, user } from "@/db/schema";
 import { writeAudit } from "@/db/queries/audit";
 import { settingsForShowId } from "@/db/queries/settings";
 import { openConflicts } from "@/db/queries/judge-conflicts";
@@ -59,8 +59,15 @@ export async function judgingSession(viewer: Viewer, slug: string) {
   const show = await requireShowRole(viewer, slug, AREA_ROLES.judging);
   const [{ seats, judges, categoryIds }, settings, sheets] = await Promise.all([judgingScope(db, show.showId, viewer.id), settingsForShowId(show.showId), sheetsOfShow(db, show.showId)]);
   const cats = categoryIds.length
-    ? await db.select({ id: categories.id, code: categories.code, name: categories.name, method: categories.judgingMethod, scoreSheetId: categories.scoreSheetId }).from(categories).where(inArray(categories.id, categoryIds))
+    ? await db.select({ id: categories.id, code: categories.code, name: categories.name, method: categories.judgingMethod, scoreSheetId: categories.scoreSheetId, precedence: categories.precedence }).from(categories).where(inArray(categories.id, categoryIds))
     : [];
+  // Which of the viewer's sessions (panels) judges each category, for the list in judging order.
+  const sessionOf = new Map<string, string>();
+  if (seats.length) {
+    const order = [...seats].sort((a, b) => a.day.localeCompare(b.day) || a.panelName.localeCompare(b.panelName)).map((s) => s.panelId);
+    const links = await db.select({ panelId: panelCategories.panelId, categoryId: panelCategories.categoryId }).from(panelCategories).where(inArray(panelCategories.panelId, order));
+    for (const panelId of order) for (const l of links) if (l.panelId === panelId && !sessionOf.has(l.categoryId)) sessionOf.set(l.categoryId, panelId);
+  }
   const rows = categoryIds.length
     ? await db.select({ id: entries.id, entryNumber: entries.entryNumber, categoryId: entries.categoryId, ...QUILT_FACTS }).from(entries).where(inSessions(show.showId, categoryIds)).orderBy(asc(entries.entryNumber))
     : [];
@@ -79,7 +86,7 @@ export async function judgingSession(viewer: Viewer, slug: string) {
     commentPolicy: settings.commentPolicy,
     quickPhrases: settings.quickPhrases,
     sheets: [...usedSheetIds].map((id) => ({ id, name: sheets.byId.get(id)!.name, sheet: sheets.byId.get(id)!.sheet })),
-    categories: cats.map((c) => ({ id: c.id, code: c.code, name: c.name, method: c.method, sheetId: c.scoreSheetId ?? sheets.defaultId })),
+    categories: cats.map((c) => ({ id: c.id, code: c.code, name: c.name, method: c.method, sheetId: c.scoreSheetId ?? sheets.defaultId, precedence: c.precedence, sessionId: sessionOf.get(c.id) ?? null })),
     entries: rows.map((r) => ({
       id: r.id,
       entryNumber: r.entryNumber!,

@@ -57,7 +57,7 @@ beforeAll(async () => {
   category = await makeCategory(show.id, { code: "10", name: "Pieced" });
   otherCategory = await makeCategory(show.id, { code: "20", name: "Appliqué" });
   for (let i = 0; i < 6; i++) {
-    const e = await makeEntry(show.id, ada.id, { categoryId: category.id, categoryState: "decided", status: "received", madeBy: ["Maker Marigold"], quiltedBy: "Longarm Larkspur", quiltedForHire: true, title: `Blind Quilt ${i}` });
+    const e = await makeEntry(show.id, ada.id, { categoryId: category.id, categoryState: "decided", paidAt: new Date(), status: "received", madeBy: ["Maker Marigold"], quiltedBy: "Longarm Larkspur", quiltedForHire: true, title: `Blind Quilt ${i}` });
     entryIds.push(e.id);
   }
   const cv = await viewerOf(chair);
@@ -79,7 +79,7 @@ describe("panels and conflicts", () => {
   it("refuses a judge on a category holding their own entry, or a declared person's, with the reason", async () => {
     const cv = await viewerOf(chair);
     // Judge Rowan enters a quilt in Appliqué.
-    await makeEntry(show.id, judge2.id, { categoryId: otherCategory.id, categoryState: "decided" });
+    await makeEntry(show.id, judge2.id, { categoryId: otherCategory.id, categoryState: "decided", paidAt: new Date() });
     await expect(savePanel(cv, show.slug, { name: "Panel R", day: "", room: "", judgeIds: [judge2.id], scribeIds: [], categoryIds: [otherCategory.id] })).rejects.toMatchObject({
       status: 409,
       message: "This panel can't be saved: Judge Rowan has an entry in 20 Appliqué, so can't judge it.",
@@ -117,6 +117,12 @@ describe("the tablet's session", () => {
       expect(Object.keys(body.entries[0]!).sort()).toEqual(["categoryId", "entryNumber", "id", "lengthUm", "pattern", "photos", "quiltingMethod", "size", "techniques", "title", "widthUm"]);
       expect(body.judges.map((j) => j.name)).toEqual(["Judge Juniper"]);
     }
+  });
+
+  it("tells which of the viewer's sessions judges each category, and its precedence, for the list in judging order", async () => {
+    const s = await judgingSession(await viewerOf(judge), show.slug);
+    const panelId = s.me.seats[0]!.panelId;
+    expect(s.categories).toEqual([expect.objectContaining({ id: category.id, code: "10", sessionId: panelId, precedence: expect.any(Number) })]);
   });
 
   it("a judge on no panel has an empty queue", async () => {
@@ -201,7 +207,7 @@ describe("syncing sheet changes", () => {
 
   it("refuses a scribe entering for a judge who is not on their panel, and entries outside the queue", async () => {
     await expect(syncSheetChanges(await viewerOf(scribe), show.slug, batchOf("tab-sorrel-0002", judge2.id, []))).rejects.toMatchObject({ status: 403 });
-    const outsider = await makeEntry(show.id, ada.id, { categoryId: otherCategory.id, categoryState: "decided" });
+    const outsider = await makeEntry(show.id, ada.id, { categoryId: otherCategory.id, categoryState: "decided", paidAt: new Date() });
     const r = await syncSheetChanges(await viewerOf(judge), show.slug, batchOf("tab-juniper-0001", judge.id, [mark(outsider.id, "impact", 30)]));
     expect(r.results[0]!.outcome).toEqual({ kind: "refused", text: "This entry isn't in your queue." });
   });
@@ -363,7 +369,7 @@ describe("a show that releases only the size: every answer to a judge or scribe"
     await grantRole(judgeA.id, early.id, "judge");
     await setSettings(early.id, { judgeFields: ["size"] });
     const cat = await makeCategory(early.id, { code: "A1" });
-    await makeEntry(early.id, maker.id, { categoryId: cat.id, categoryState: "decided", title: "Zephyr Unreleased Title", madeBy: ["Maker Marigold"] });
+    await makeEntry(early.id, maker.id, { categoryId: cat.id, categoryState: "decided", paidAt: new Date(), title: "Zephyr Unreleased Title", madeBy: ["Maker Marigold"] });
     const [p] = await db.insert(judgingPanels).values({ showId: early.id, name: "Panel A" }).returning();
     await db.insert(panelMembers).values({ panelId: p!.id, userId: judgeA.id, role: "judge" });
     await db.insert(panelCategories).values({ panelId: p!.id, categoryId: cat.id });
