@@ -4,8 +4,9 @@ import { PassThrough } from "node:stream";
 import ExcelJS from "exceljs";
 import { DIVISION_LABELS, QUILTING_METHOD_LABELS, labelOf } from "@/components/entries/labels";
 import { UM_PER_CM, UM_PER_INCH } from "@/scoring/units";
+import { categoryText, type CategoryOfEntry } from "@/lib/category-text";
 
-export type WorkbookEntry = {
+export type WorkbookEntry = CategoryOfEntry & {
   entryNumber: number | null;
   title: string;
   entrantName: string;
@@ -65,6 +66,8 @@ function columns(currency: string, timeZone: string): Col[] {
     { header: "Entrant", key: "entrant", width: 24, value: (e) => e.entrantName },
     { header: "E-mail", key: "email", width: 30, value: (e) => e.email },
     { header: "Phone", key: "phone", width: 16, value: (e) => e.phone },
+    { header: "Category code", key: "categoryCode", width: 10, value: (e) => e.categoryCode ?? "" },
+    { header: "Category", key: "category", width: 28, value: (e) => (e.categoryCode ? (e.categoryName ?? "") : categoryText(e)) },
     { header: "Division", key: "division", width: 16, value: (e) => labelOf(DIVISION_LABELS, e.division) },
     { header: "Judged", key: "judged", width: 9, value: (e) => yesNo(e.judged) },
     { header: "Width in", key: "widthIn", width: 10, numFmt: "0.###", value: (e) => inches(e.widthUm) },

@@ -8,6 +8,7 @@ import { DIVISION_LABELS, labelOf } from "@/components/entries/labels";
 import { Badge } from "@/components/ui/badge";
 import { formatDateTime } from "@/components/format/dates";
 import { formatSize } from "@/scoring/units";
+import { categoryText } from "@/lib/category-text";
 import type { ChairEntry } from "./types";
 
 export const features = tableFeatures({ rowSelectionFeature, columnVisibilityFeature, rowSortingFeature });
@@ -20,6 +21,7 @@ export const COLUMN_LABELS: Record<string, string> = {
   title: "Title",
   entrant: "Entrant",
   email: "E-mail",
+  category: "Category",
   size: "Size",
   division: "Division",
   judged: "Judged",
@@ -35,6 +37,7 @@ export const DEFAULT_VISIBILITY: Record<string, boolean> = {
   title: true,
   entrant: true,
   email: false,
+  category: true,
   size: true,
   division: true,
   judged: true,
@@ -66,6 +69,11 @@ export function entryColumns(showSlug: string, timeZone: string, currency: strin
     }),
     helper.accessor("entrantName", { id: "entrant", header: COLUMN_LABELS.entrant }),
     helper.accessor("entrantEmail", { id: "email", header: COLUMN_LABELS.email, enableSorting: false, cell: (c) => <span className="break-all">{c.getValue()}</span> }),
+    helper.accessor((e) => categoryText(e), {
+      id: "category",
+      header: COLUMN_LABELS.category,
+      cell: (c) => (c.row.original.categoryCode ? c.getValue() : <span className="text-ink-muted">{c.getValue()}</span>),
+    }),
     helper.accessor((e) => e.widthUm * e.lengthUm, {
       id: "size",
       header: COLUMN_LABELS.size,

@@ -68,7 +68,7 @@ export function EntriesTable({ showSlug, initial }: Props) {
 
   return (
     <div className="space-y-5">
-      <div className="grid gap-4 sm:grid-cols-2 lg:grid-cols-6">
+      <div className="grid gap-4 sm:grid-cols-2 lg:grid-cols-4 xl:grid-cols-7">
         <TextField
           className="sm:col-span-2"
           label="Search"
@@ -103,13 +103,21 @@ export function EntriesTable({ showSlug, initial }: Props) {
             </option>
           ))}
         </SelectField>
+        <SelectField label="Category" value={query.category ?? ""} onChange={(e) => change({ category: (e.target.value || undefined) as EntriesListQuery["category"] })}>
+          <option value="">Any category</option>
+          {page.categories.map((c) => (
+            <option key={c.id} value={c.id}>
+              {c.code} {c.name}
+            </option>
+          ))}
+          <option value="none">Not in a category yet</option>
+        </SelectField>
         <SelectField label="Judged" value={query.judged ?? ""} onChange={(e) => change({ judged: (e.target.value || undefined) as EntriesListQuery["judged"] })}>
           <option value="">Judged and display</option>
           <option value="judged">Judged</option>
           <option value="display">Display only</option>
         </SelectField>
       </div>
-      <p className="text-sm text-ink-muted">Filtering by category comes with categories in a later update.</p>
 
       <div className="flex flex-wrap items-start justify-between gap-3">
         <details className="rounded-card border border-line bg-surface">

@@ -4,8 +4,9 @@ import type { ReactNode } from "react";
 import { DIVISION_LABELS, QUILTING_METHOD_LABELS, labelOf } from "@/components/entries/labels";
 import { formatDateTime } from "@/components/format/dates";
 import { formatSize, formatInches } from "@/scoring/units";
+import { categoryText, type CategoryOfEntry } from "@/lib/category-text";
 
-export type EntryFacts = {
+export type EntryFacts = CategoryOfEntry & {
   widthUm: number;
   lengthUm: number;
   sizeUnit: string;
@@ -49,6 +50,7 @@ function patternCredit(e: EntryFacts): string {
 export function EntryFactList({ entry: e, money, timeZone, juried }: { entry: EntryFacts; money: (cents: number) => string; timeZone: string; juried: boolean }) {
   return (
     <dl className="divide-y divide-line">
+      <Row term="Category">{categoryText(e)}</Row>
       <Row term="Size">
         {formatSize(e.widthUm, e.lengthUm)}
         <span className="block text-sm text-ink-muted">

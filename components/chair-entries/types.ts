@@ -11,6 +11,9 @@ export type ChairEntry = {
   lengthUm: number;
   division: string;
   judged: boolean;
+  categoryState: string;
+  categoryCode: string | null;
+  categoryName: string | null;
   status: string;
   paymentState: PaymentState;
   paymentReference: string;
@@ -22,6 +25,8 @@ export type ChairEntry = {
 
 export type ChairEntriesPage = {
   show: { slug: string; name: string; timeZone: string; juried: boolean; currency: string };
+  /** The show's categories in its own order, for the filter. */
+  categories: { id: string; code: string; name: string }[];
   total: number;
   limit: number;
   offset: number;

@@ -1,6 +1,6 @@
 "use client";
 // The intake desk's list with a search box: by entry number, entrant or title, in the browser;
-// each entry's category code, the size measured at the desk with its flag, and a Measure form.
+// each entry's category (code and name), the size measured at the desk with its flag, and a Measure form.
 import { Fragment, useDeferredValue, useId, useMemo, useState } from "react";
 import { CircleCheck, Ruler, Search, SearchX, TriangleAlert } from "lucide-react";
 import { EntryStatusBadge } from "@/components/entries/entry-status";
@@ -24,6 +24,7 @@ export type DeskEntry = {
   lengthUm: number;
   categoryState: string;
   categoryCode: string | null;
+  categoryName: string | null;
   measuredWidthUm: number | null;
   measuredLengthUm: number | null;
   sizeFlag: string;
@@ -33,9 +34,16 @@ export type DeskEntry = {
 const OUT_OF_SHOW = new Set(["withdrawn", "declined"]);
 const canMeasure = (e: DeskEntry) => !OUT_OF_SHOW.has(e.status);
 
-function categoryText(e: DeskEntry): string {
-  if (e.categoryCode) return e.categoryCode;
-  if (e.categoryState === "fits_none" || e.categoryState === "fits_several") return "Chair to place";
+/** The code with the category's name: "11" alone means nothing to a volunteer at the desk. */
+function categoryCell(e: DeskEntry) {
+  if (e.categoryCode) {
+    return (
+      <>
+        <span className="font-semibold tabular-nums">{e.categoryCode}</span> {e.categoryName}
+      </>
+    );
+  }
+  if (e.categoryState === "fits_none" || e.categoryState === "fits_several") return <span className="font-semibold">Chair to place</span>;
   return "—";
 }
 
@@ -133,7 +141,7 @@ export function IntakeTable({ showSlug, initialEntries }: { showSlug: string; in
                   <Td label="Title">{e.title}</Td>
                   <Td label="Entrant">{e.entrantName}</Td>
                   <Td label="Category">
-                    <span className="font-semibold tabular-nums">{categoryText(e)}</span>
+                    {categoryCell(e)}
                   </Td>
                   <Td label="Size">
                     <SizeCell entry={e} />

@@ -8,6 +8,7 @@ import { settingsForShowId } from "@/db/queries/settings";
 import { chairMayWithdraw, refundIfWithdrawn } from "@/db/queries/withdrawals";
 import {
   auditLog,
+  categories,
   entrantProfiles,
   entries,
   entryPhotos,
@@ -57,6 +58,8 @@ function listWhere(showId: string, q: EntriesListQuery): SQL {
       conds.push(or(ilike(entries.title, like), ilike(user.name, like), ilike(entrantProfiles.displayName, like), ilike(user.email, like)));
     }
   }
+  if (q.category === "none") conds.push(isNull(entries.categoryId));
+  else if (q.category) conds.push(eq(entries.categoryId, q.category));
   if (q.status) conds.push(eq(entries.status, q.status));
   if (q.division) conds.push(eq(entries.division, q.division));
   if (q.judged) conds.push(eq(entries.judged, q.judged === "judged"));
@@ -77,9 +80,20 @@ function listOrder(q: EntriesListQuery): SQL[] {
     submitted: entries.submittedAt,
     // The enum's own order follows an entry's life: submitted, paid, accepted, …
     status: entries.status,
+    // The show's own category order; entries with no category last.
+    category: sql`coalesce(${categories.precedence}, 2147483647)`,
   }[q.sort];
   // Entry number, then id, break ties so pages never overlap or skip a row.
   return [dir(key), asc(entries.entryNumber), asc(entries.id)];
+}
+
+/** The show's categories in the show's own order (merged ones too: an entry may still sit in one). */
+function categoriesInOrder(showId: string) {
+  return db
+    .select({ id: categories.id, code: categories.code, name: categories.name })
+    .from(categories)
+    .where(eq(categories.showId, showId))
+    .orderBy(asc(categories.precedence), asc(categories.code));
 }
 
 export async function entriesForChair(viewer: Viewer, showSlug: string, q: EntriesListQuery) {
@@ -92,7 +106,7 @@ export async function entriesForChair(viewer: Viewer, showSlug: string, q: Entri
       .innerJoin(user, eq(user.id, entries.entrantUserId))
       .leftJoin(entrantProfiles, eq(entrantProfiles.userId, entries.entrantUserId))
       .where(where);
-  const [rows, [count], facts] = await Promise.all([
+  const [rows, [count], facts, showCategories] = await Promise.all([
     db
       .select({
         id: entries.id,
@@ -104,6 +118,9 @@ export async function entriesForChair(viewer: Viewer, showSlug: string, q: Entri
         lengthUm: entries.lengthUm,
         division: entries.division,
         judged: entries.judged,
+        categoryState: entries.categoryState,
+        categoryCode: categories.code,
+        categoryName: categories.name,
         status: entries.status,
         paymentState,
         paymentReference: entries.paymentReference,
@@ -115,15 +132,18 @@ export async function entriesForChair(viewer: Viewer, showSlug: string, q: Entri
       .from(entries)
       .innerJoin(user, eq(user.id, entries.entrantUserId))
       .leftJoin(entrantProfiles, eq(entrantProfiles.userId, entries.entrantUserId))
+      .leftJoin(categories, eq(categories.id, entries.categoryId))
       .where(where)
       .orderBy(...listOrder(q))
       .limit(q.limit)
       .offset(q.offset),
     from(),
     showFacts(show.showId),
+    categoriesInOrder(show.showId),
   ]);
   return {
     show: { slug: show.slug, name: show.name, timeZone: facts.timeZone, juried: facts.juried, currency: facts.currency },
+    categories: showCategories,
     total: count?.n ?? 0,
     limit: q.limit,
     offset: q.offset,
@@ -152,10 +172,13 @@ export async function entryDetailForChair(viewer: Viewer, showSlug: string, entr
       rulesVersion: showRulesVersions.version,
       rulesPublishedAt: showRulesVersions.publishedAt,
       paymentState,
+      categoryCode: categories.code,
+      categoryName: categories.name,
     })
     .from(entries)
     .innerJoin(user, eq(user.id, entries.entrantUserId))
     .leftJoin(entrantProfiles, eq(entrantProfiles.userId, entries.entrantUserId))
+    .leftJoin(categories, eq(categories.id, entries.categoryId))
     .leftJoin(showRulesVersions, eq(showRulesVersions.id, entries.rulesVersionId))
     .where(and(eq(entries.id, entryId), eq(entries.showId, show.showId), ne(entries.status, "draft")));
   if (!row) throw notFound("That entry was not found at this show.");
@@ -193,7 +216,7 @@ export async function entryDetailForChair(viewer: Viewer, showSlug: string, entr
   const refund = canWithdraw && entry.paymentReference.startsWith("card ") ? await refundIfWithdrawn(db, entryId, (await settingsForShowId(show.showId)).withdrawalRefundPercent) : null;
   return {
     show: { slug: show.slug, name: show.name, timeZone: facts.timeZone, juried: facts.juried, currency: facts.currency },
-    entry: { ...entry, paymentState: row.paymentState },
+    entry: { ...entry, paymentState: row.paymentState, categoryCode: row.categoryCode, categoryName: row.categoryName },
     withdrawal: { allowed: canWithdraw, paidByCard: entry.paymentReference.startsWith("card "), refundCents: refund?.refundCents ?? 0 },
     entrant: { name: row.displayName || row.accountName, email: row.email, phone: row.phone ?? "", guild: row.guild ?? "" },
     rules: row.rulesVersion === null ? null : { version: row.rulesVersion, publishedAt: row.rulesPublishedAt, acceptedAt: entry.rulesAcceptedAt },
@@ -384,6 +407,9 @@ export async function entriesForExport(viewer: Viewer, showSlug: string) {
       phone: sql<string>`coalesce(${entrantProfiles.phone}, '')`,
       division: entries.division,
       judged: entries.judged,
+      categoryState: entries.categoryState,
+      categoryCode: categories.code,
+      categoryName: categories.name,
       widthUm: entries.widthUm,
       lengthUm: entries.lengthUm,
       techniques: entries.techniques,
@@ -402,6 +428,7 @@ export async function entriesForExport(viewer: Viewer, showSlug: string) {
     .from(entries)
     .innerJoin(user, eq(user.id, entries.entrantUserId))
     .leftJoin(entrantProfiles, eq(entrantProfiles.userId, entries.entrantUserId))
+    .leftJoin(categories, eq(categories.id, entries.categoryId))
     .where(and(eq(entries.showId, show.showId), notInArray(entries.status, ["draft"])))
     .orderBy(asc(entries.entryNumber), asc(entries.id));
   return { show: { slug: show.slug, name: show.name, timeZone: facts.timeZone, currency: facts.currency }, rows };

@@ -20,6 +20,7 @@ export async function intakeList(viewer: Viewer, showSlug: string) {
       lengthUm: entries.lengthUm,
       categoryState: entries.categoryState,
       categoryCode: categories.code,
+      categoryName: categories.name,
       measuredWidthUm: entries.measuredWidthUm,
       measuredLengthUm: entries.measuredLengthUm,
       sizeFlag: entries.sizeFlag,

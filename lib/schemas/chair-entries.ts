@@ -7,7 +7,7 @@ import { storableString } from "@/lib/validation";
 export const CHAIR_STATUSES = ["submitted", "paid", "accepted", "declined", "received", "judged", "hung", "returned", "withdrawn"] as const;
 export const PAYMENT_STATES = ["paid", "unpaid", "refunded"] as const;
 export const DIVISIONS = ["open", "youth", "first_time"] as const;
-export const SORT_KEYS = ["number", "title", "entrant", "size", "submitted", "status"] as const;
+export const SORT_KEYS = ["number", "title", "entrant", "category", "size", "submitted", "status"] as const;
 export const PAGE_SIZES = [25, 50, 100, 200] as const;
 
 export type PaymentState = (typeof PAYMENT_STATES)[number];
@@ -22,8 +22,10 @@ export const entriesListSchema = z.object({
   status: anyOf(CHAIR_STATUSES, "Choose a status from the list."),
   payment: anyOf(PAYMENT_STATES, "Choose paid, unpaid or refunded."),
   division: anyOf(DIVISIONS, "Choose a division from the list."),
+  // A category's id, or "none" for entries not in a category yet.
+  category: z.preprocess((v) => (v === "" ? undefined : v), z.union([z.literal("none"), z.uuid()], "Choose a category from the list.").optional()),
   judged: anyOf(["judged", "display"] as const, "Choose judged or display only."),
-  sort: z.enum(SORT_KEYS, "Sort by number, title, entrant, size, submitted date or status.").default("number"),
+  sort: z.enum(SORT_KEYS, "Sort by number, title, entrant, category, size, submitted date or status.").default("number"),
   dir: z.enum(["asc", "desc"], "Sort direction is asc or desc.").default("asc"),
   limit: z.coerce.number("Page size must be a number.").int().min(1, "Page size is at least 1.").max(200, "Page size is at most 200.").default(50),
   offset: z.coerce.number("The page start must be a number.").int().min(0, "The page start cannot be negative.").max(1_000_000).default(0),

@@ -5,11 +5,14 @@ import { beforeAll, describe, expect, it } from "vitest";
 import { db } from "@/db/client";
 import { entrantProfiles, entries, paymentItems, payments, user } from "@/db/schema";
 import { GET } from "@/app/api/shows/[slug]/entries/route";
+import { entriesForExport, entryDetailForChair } from "@/db/queries/chair-entries";
+import { intakeList } from "@/db/queries/desk";
+import { getViewer } from "@/lib/session";
 import { inchesToUm } from "@/scoring/units";
-import { grantRole, makeShow, makeUser, type TestUser } from "../../helpers/factories";
+import { grantRole, makeCategory, makeShow, makeUser, type TestUser } from "../../helpers/factories";
 
-type Row = { id: string; entryNumber: number; title: string; entrantName: string; entrantEmail: string; widthUm: number; lengthUm: number; status: string; division: string; judged: boolean; paymentState: string; submittedAt: string | null };
-type Page = { total: number; limit: number; offset: number; entries: Row[] };
+type Row = { id: string; entryNumber: number; categoryId?: string | null; categoryCode: string | null; categoryName: string | null; title: string; entrantName: string; entrantEmail: string; widthUm: number; lengthUm: number; status: string; division: string; judged: boolean; paymentState: string; submittedAt: string | null };
+type Page = { total: number; limit: number; offset: number; entries: Row[]; categories: { id: string; code: string; name: string }[] };
 
 const STATUSES = ["submitted", "paid", "accepted", "declined", "received", "withdrawn"] as const;
 const DIVISIONS = ["open", "youth", "first_time"] as const;
@@ -20,6 +23,8 @@ let chair: TestUser;
 let judge: TestUser;
 let otherChair: TestUser;
 let expected: Row[] = [];
+// Listed in the show's order (precedence), which is not the order of their codes.
+let cats: { id: string; code: string; name: string }[] = [];
 
 async function list(who: TestUser, query: Record<string, string | number> = {}): Promise<{ status: number; body: Page & { fieldErrors?: Record<string, string[]> } }> {
   const qs = new URLSearchParams(Object.entries(query).map(([k, v]) => [k, String(v)]));
@@ -59,11 +64,20 @@ beforeAll(async () => {
   await db.insert(user).values(people.map((p) => ({ id: p.id, name: p.name, email: p.email, emailVerified: true })));
   await db.insert(entrantProfiles).values(people.filter((p) => p.displayName).map((p) => ({ userId: p.id, displayName: p.displayName! })));
 
+  const late = await makeCategory(show.id, { code: "10", name: "Art, Small", precedence: 2 });
+  const early = await makeCategory(show.id, { code: "20", name: "Bed, Large", precedence: 1 });
+  cats = [early, late].map((c) => ({ id: c.id, code: c.code, name: c.name }));
+
   const base = Date.UTC(2027, 1, 1, 12);
   const values = Array.from({ length: 300 }, (_, i) => {
     const who = people[(i * 7) % people.length]!;
     const status = STATUSES[i % STATUSES.length]!;
+    // One in four has no category yet; the rest alternate between the two.
+    const cat = i % 4 === 3 ? null : cats[i % 2]!;
     return {
+      categoryId: cat?.id ?? null,
+      categoryState: cat ? ("decided" as const) : ("undecided" as const),
+      _cat: cat,
       id: randomUUID(),
       showId: show.id,
       entrantUserId: who.id,
@@ -81,7 +95,7 @@ beforeAll(async () => {
       _who: who,
     };
   });
-  await db.insert(entries).values(values.map(({ _who, ...v }) => v));
+  await db.insert(entries).values(values.map(({ _who, _cat, ...v }) => v));
   // A draft belongs to its entrant alone: never in the chair's table.
   await db.insert(entries).values({ showId: show.id, entrantUserId: people[0]!.id, title: "Harbor draft", widthUm: 1, lengthUm: 1, quiltingMethod: "hand", status: "draft" });
   // Entries 101–110 paid through checkout; 101–104 of them refunded since.
@@ -97,6 +111,9 @@ beforeAll(async () => {
     title: v.title,
     entrantName: v._who.displayName ?? v._who.name,
     entrantEmail: v._who.email,
+    categoryId: v.categoryId,
+    categoryCode: v._cat?.code ?? null,
+    categoryName: v._cat?.name ?? null,
     widthUm: v.widthUm,
     lengthUm: v.lengthUm,
     status: v.status,
@@ -117,6 +134,13 @@ describe("the chair's entries table", () => {
     const first = body.entries[0]!;
     const want = expected[0]!;
     expect(first).toMatchObject({ id: want.id, title: want.title, entrantName: want.entrantName, entrantEmail: want.entrantEmail, status: want.status, paymentState: "refunded" });
+  });
+
+  it("gives each entry its category's code and name, and the show's categories in the show's order", async () => {
+    const { body } = await list(chair, { limit: 4 });
+    expect(body.entries.map((e) => [e.categoryCode, e.categoryName])).toEqual(expected.slice(0, 4).map((e) => [e.categoryCode, e.categoryName]));
+    expect(body.entries[3]!.categoryCode).toBeNull();
+    expect(body.categories).toEqual(cats);
   });
 
   it("pages through every entry exactly once", async () => {
@@ -165,8 +189,12 @@ describe("the chair's entries table", () => {
     ["paid", { payment: "paid" }, (e: Row) => e.paymentState === "paid"],
     ["unpaid", { payment: "unpaid" }, (e: Row) => e.paymentState === "unpaid"],
     ["refunded", { payment: "refunded" }, (e: Row) => e.paymentState === "refunded"],
+    ["category", { category: "CAT0" }, (e: Row) => e.categoryId === cats[0]!.id],
+    ["no category yet", { category: "none" }, (e: Row) => e.categoryId === null],
     ["combined", { status: "paid", division: "youth", judged: "judged", payment: "paid" }, (e: Row) => e.status === "paid" && e.division === "youth" && e.judged && e.paymentState === "paid"],
-  ] as const)("filters by %s", async (_, query, keep) => {
+  ] as const)("filters by %s", async (_, q, keep) => {
+    // The category's id is known only once the show is made.
+    const query = Object.fromEntries(Object.entries(q).map(([k, v]) => [k, v === "CAT0" ? cats[0]!.id : v])) as Record<string, string>;
     const got = await all(chair, query);
     const want = expected.filter(keep);
     expect(want.length).toBeGreaterThan(0);
@@ -181,10 +209,13 @@ describe("the chair's entries table", () => {
   });
 
   const cmp = (a: string, b: string) => (a < b ? -1 : a > b ? 1 : 0);
+  const rankOf = (r: Row) => (r.categoryId ? cats.findIndex((c) => c.id === r.categoryId) : cats.length);
   it.each([
     ["number", (a: Row, b: Row) => a.entryNumber - b.entryNumber],
     ["title", (a: Row, b: Row) => cmp(a.title.toLowerCase(), b.title.toLowerCase())],
     ["entrant", (a: Row, b: Row) => cmp(a.entrantName.toLowerCase(), b.entrantName.toLowerCase())],
+    // By the show's order of categories, entries with none last.
+    ["category", (a: Row, b: Row) => rankOf(a) - rankOf(b)],
     ["size", (a: Row, b: Row) => a.widthUm * a.lengthUm - b.widthUm * b.lengthUm],
     ["submitted", (a: Row, b: Row) => cmp(a.submittedAt!, b.submittedAt!)],
     ["status", (a: Row, b: Row) => STATUSES.indexOf(a.status as never) - STATUSES.indexOf(b.status as never)],
@@ -203,6 +234,20 @@ describe("the chair's entries table", () => {
     const status = await list(chair, { status: "draft" });
     expect(status.status).toBe(400);
     expect(Object.keys(status.body.fieldErrors ?? {})).toEqual(["status"]);
+    const category = await list(chair, { category: "11" });
+    expect(category.status).toBe(400);
+    expect(Object.keys(category.body.fieldErrors ?? {})).toEqual(["category"]);
+  });
+
+  it("names the category on the entry page, in the spreadsheet rows and at the desk", async () => {
+    const viewer = (await getViewer(new Headers({ cookie: chair.cookie })))!;
+    const detail = await entryDetailForChair(viewer, show.slug, expected[0]!.id);
+    expect(detail.entry).toMatchObject({ categoryCode: expected[0]!.categoryCode, categoryName: expected[0]!.categoryName });
+    const files = await entriesForExport(viewer, show.slug);
+    expect(files.rows[1]).toMatchObject({ categoryCode: expected[1]!.categoryCode, categoryName: expected[1]!.categoryName });
+    const desk = await intakeList(viewer, show.slug);
+    const atDesk = desk.entries.find((e) => e.id === expected[2]!.id)!;
+    expect(atDesk).toMatchObject({ categoryCode: expected[2]!.categoryCode, categoryName: expected[2]!.categoryName });
   });
 
   it("refuses anyone but this show's chair", async () => {

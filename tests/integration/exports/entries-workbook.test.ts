@@ -8,7 +8,7 @@ import { db } from "@/db/client";
 import { entrantProfiles, entries, paymentItems, payments, showSettings, user } from "@/db/schema";
 import { GET } from "@/app/api/shows/[slug]/entries/export/route";
 import { cmToUm, inchesToUm } from "@/scoring/units";
-import { grantRole, makeEntry, makeShow, makeUser, unique, type TestUser } from "../../helpers/factories";
+import { grantRole, makeCategory, makeEntry, makeShow, makeUser, unique, type TestUser } from "../../helpers/factories";
 
 let show: { id: string; slug: string; name: string };
 let chair: TestUser;
@@ -32,8 +32,11 @@ beforeAll(async () => {
   await db.insert(user).values({ id, name: "Account Name", email: entrantEmail, emailVerified: true });
   await db.insert(entrantProfiles).values({ userId: id, displayName: "Rowan Invented", phone: "555-0142" });
 
+  const category = await makeCategory(show.id, { code: "11", name: "Pieced, Medium" });
   const first = await makeEntry(show.id, id, {
     entryNumber: 101,
+    categoryId: category.id,
+    categoryState: "decided",
     title: "Prairie Crossing",
     widthUm: inchesToUm(60.5),
     lengthUm: inchesToUm(72.25),
@@ -82,7 +85,7 @@ describe("the entries workbook", () => {
     expect(n).toBe(42);
     const range = XLSX.utils.decode_range(ws["!ref"]!);
     expect(range.e.r).toBe(n); // header row 0 + one row per entry
-    expect(range.e.c + 1).toBe(24);
+    expect(range.e.c + 1).toBe(26);
 
     const rows = XLSX.utils.sheet_to_json<Record<string, unknown>>(ws, { raw: true });
     expect(rows).toHaveLength(n);
@@ -93,6 +96,8 @@ describe("the entries workbook", () => {
       Entrant: "Rowan Invented",
       "E-mail": entrantEmail,
       Phone: "555-0142",
+      "Category code": "11",
+      Category: "Pieced, Medium",
       Division: "Open",
       Judged: "yes",
       // 60½ × 72¼ in; 1 in = 2.54 cm exactly (NIST SP 811).
@@ -119,19 +124,19 @@ describe("the entries workbook", () => {
     expect((when as Date).toISOString().slice(0, 16)).toBe("2027-03-14T10:30");
 
     const second = rows[1]!;
-    expect(second).toMatchObject({ "Entry number": 102, Division: "Youth", Judged: "no", "Width cm": 150, "Length cm": 200, Paid: "unpaid", "Amount paid $": 0 });
+    expect(second).toMatchObject({ "Entry number": 102, Category: "Not decided yet", Division: "Youth", Judged: "no", "Width cm": 150, "Length cm": 200, Paid: "unpaid", "Amount paid $": 0 });
     expect(second["Price $"]).toBeUndefined();
 
     // Cell types: n = number, d = date, s = string (SheetJS cell object docs).
     expect(ws.A2!.t).toBe("n");
-    expect(ws.H2!.t).toBe("n");
-    expect(ws.Q2!.t).toBe("n");
-    expect(ws.Q2!.z).toContain("$");
-    expect(ws.Q2!.z).toContain("0.00");
-    expect(ws.X2!.t).toBe("d");
+    expect(ws.J2!.t).toBe("n");
+    expect(ws.S2!.t).toBe("n");
+    expect(ws.S2!.z).toContain("$");
+    expect(ws.S2!.z).toContain("0.00");
+    expect(ws.Z2!.t).toBe("d");
     expect(ws.B2!.t).toBe("s");
 
-    expect(ws["!autofilter"]).toEqual({ ref: "A1:X1" });
+    expect(ws["!autofilter"]).toEqual({ ref: "A1:Z1" });
     const files = (wb as unknown as { files: Record<string, { content: Uint8Array }> }).files;
     const sheetXml = Buffer.from(files["xl/worksheets/sheet1.xml"]!.content).toString("utf8");
     expect(sheetXml).toMatch(/<pane[^>]*ySplit="1"[^>]*state="frozen"|<pane[^>]*state="frozen"[^>]*ySplit="1"/);
