@@ -54,8 +54,8 @@ export async function makeJudgingShow(prefix: string, count = 6): Promise<Judgin
       const entries: { id: string; entryNumber: number }[] = [];
       for (let i = 1; i <= count; i++) {
         const [e] = await tx<{ id: string }[]>`
-          insert into entries (show_id, entrant_user_id, entry_number, title, width_um, length_um, techniques, quilting_method, status, category_id, category_state, judged)
-          values (${showId}, ${users["chair@ribbonry.test"]!.id}, ${100 + i}, ${`Scratch quilt ${100 + i}`}, ${60 * UM_PER_INCH}, ${72 * UM_PER_INCH}, ${sql.array(["pieced"])}, 'home_machine', 'received', ${cat!.id}, 'decided', true)
+          insert into entries (show_id, entrant_user_id, entry_number, title, width_um, length_um, techniques, quilting_method, status, paid_at, category_id, category_state, judged)
+          values (${showId}, ${users["chair@ribbonry.test"]!.id}, ${100 + i}, ${`Scratch quilt ${100 + i}`}, ${60 * UM_PER_INCH}, ${72 * UM_PER_INCH}, ${sql.array(["pieced"])}, 'home_machine', 'received', now(), ${cat!.id}, 'decided', true)
           returning id`;
         entries.push({ id: e!.id, entryNumber: 100 + i });
       }

@@ -48,8 +48,8 @@ export async function makeConflictShow(chairEmail: string): Promise<ConflictShow
     await sql`insert into score_sheets (show_id, name, sheet, is_default) values (${showId}, ${DEMO_SHEET.name}, ${sql.json(DEMO_SHEET.sheet as never)}, true)`;
     // Judge Tobias Greave entered a quilt in Art quilts; the chair entered one in Pieced.
     const entry = (entrant: string, number: number, title: string, categoryId: string) => sql`
-      insert into entries (show_id, entrant_user_id, entry_number, title, width_um, length_um, techniques, made_by, quilting_method, status, submitted_at, category_id, category_state)
-      values (${showId}, ${entrant}, ${number}, ${title}, ${40 * UM_PER_INCH}, ${50 * UM_PER_INCH}, ${sql.array(["pieced"])}, ${sql.array(["Scratch Maker"])}, 'home_machine', 'received', now(), ${categoryId}, 'decided')`;
+      insert into entries (show_id, entrant_user_id, entry_number, title, width_um, length_um, techniques, made_by, quilting_method, status, submitted_at, paid_at, category_id, category_state)
+      values (${showId}, ${entrant}, ${number}, ${title}, ${40 * UM_PER_INCH}, ${50 * UM_PER_INCH}, ${sql.array(["pieced"])}, ${sql.array(["Scratch Maker"])}, 'home_machine', 'received', now(), now(), ${categoryId}, 'decided')`;
     await entry(people[1].id, 1, "Heron at Dusk", art!.id);
     await entry(chair.id, 2, "Nine-Patch Morning", pieced!.id);
     return {

@@ -68,7 +68,11 @@ export async function grantRole(userId: string, showId: string, role: ShowRole) 
 }
 
 let nextNumber = 1000;
+/** Statuses an entry reaches only after it is paid, so the factory marks them paid unless told. */
+const PAID_BY_THEN = new Set(["paid", "received", "judged", "hung", "returned"]);
+
 export async function makeEntry(showId: string, entrantUserId: string, fields: Partial<typeof entries.$inferInsert> = {}) {
+  const paidAt = "paidAt" in fields ? fields.paidAt : PAID_BY_THEN.has(fields.status ?? "submitted") ? new Date() : null;
   const [row] = await db
     .insert(entries)
     .values({
@@ -82,6 +86,7 @@ export async function makeEntry(showId: string, entrantUserId: string, fields: P
       status: "submitted",
       madeBy: ["Test Maker"],
       ...fields,
+      paidAt,
     })
     .returning();
   return row!;

@@ -28,7 +28,7 @@ async function judgedShow() {
   const scores: [string, number, number, string][] = [["Harbor Lights", 94, 96, maker.id], ["Marsh Wren", 88, 93, other.id], ["Tidewater", 79, 85, other.id]];
   const entries = [];
   for (const [title, x, y, owner] of scores) {
-    const e = await makeEntry(show.id, owner, { categoryId: cat.id, categoryState: "decided", title });
+    const e = await makeEntry(show.id, owner, { categoryId: cat.id, categoryState: "decided", paidAt: new Date(), title });
     entries.push(e);
     for (const [judge, total] of [[a.id, x], [b.id, y]] as const) {
       await db.insert(judgeSheets).values({ showId: show.id, entryId: e.id, judgeUserId: judge, status: "submitted", state: { ...emptySheet(), status: "submitted" }, total: { total, complete: true, percent: total } });

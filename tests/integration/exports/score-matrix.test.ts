@@ -39,8 +39,8 @@ describe("score matrix", () => {
       sheet: { sections: [{ id: "a", title: "All", criteria: [crit("impact", "Visual impact", 40), crit("design", "Design", 30), crit("piecing", "Piecing", 30)] }] },
     });
     const cat = await makeCategory(show.id, { code: "10" });
-    const e1 = await makeEntry(show.id, entrant.id, { categoryId: cat.id, categoryState: "decided" });
-    const e2 = await makeEntry(show.id, entrant.id, { categoryId: cat.id, categoryState: "decided" });
+    const e1 = await makeEntry(show.id, entrant.id, { categoryId: cat.id, categoryState: "decided", paidAt: new Date() });
+    const e2 = await makeEntry(show.id, entrant.id, { categoryId: cat.id, categoryState: "decided", paidAt: new Date() });
     await db.insert(judgeSheets).values([
       { showId: show.id, entryId: e1.id, judgeUserId: j1.id, scoreSheetId: sheetId, status: "submitted", state: stateWith({ impact: 36, design: 27, piecing: 25 }), total: { total: 88 } },
       { showId: show.id, entryId: e1.id, judgeUserId: j2.id, scoreSheetId: sheetId, status: "submitted", state: stateWith({ impact: 38, design: 28, piecing: "na" }), total: { total: 94.29 } },

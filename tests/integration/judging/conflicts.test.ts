@@ -45,7 +45,7 @@ const openOf = async () => (await judgingSetup(await viewerOf(chair), show.slug)
 
 describe("declarations", () => {
   it("answer a judge the same whether or not the person has an entry; the chair sees the match", async () => {
-    await makeEntry(show.id, ada.id, { categoryId: pieced.id, categoryState: "decided" });
+    await makeEntry(show.id, ada.id, { categoryId: pieced.id, categoryState: "decided", paidAt: new Date() });
     actAs(judge.cookie);
     const match = await addDeclarationAction(null, { showSlug: show.slug, personName: "", personEmail: ada.email, relation: "student" });
     const none = await addDeclarationAction(null, { showSlug: show.slug, personName: "", personEmail: `${randomUUID().slice(0, 8)}@example.test`, relation: "student" });
@@ -94,7 +94,7 @@ describe("an entry sent into a category its entrant judges", () => {
 describe("a category move", () => {
   it("into a category the entrant's declared judge judges is kept for the chair; moving the judge off the panel resolves it", async () => {
     await addDeclaration(await viewerOf(chair), show.slug, { judgeUserId: judge.id, personName: "Maker Marigold", personEmail: "", relation: "household" });
-    const entry = await makeEntry(show.id, ada.id, { categoryId: applique.id, categoryState: "decided", madeBy: ["Maker Marigold"] });
+    const entry = await makeEntry(show.id, ada.id, { categoryId: applique.id, categoryState: "decided", paidAt: new Date(), madeBy: ["Maker Marigold"] });
     expect(await recordsOf(judge.id)).toEqual([]);
     await overrideEntryCategory(await viewerOf(chair), show.slug, { entryId: entry.id, categoryId: pieced.id, reason: "It is pieced after all" });
     expect((await recordsOf(judge.id)).map((r) => [r.entryId, r.foundWhen])).toEqual([[entry.id, "category_move"]]);
@@ -107,13 +107,13 @@ describe("a category move", () => {
     const [record] = await recordsOf(judge.id);
     expect(record).toMatchObject({ decision: "moved", decidedBy: chair.id });
     // Judge Rowan is now the panel's only judge: taking them off too is refused with the way out.
-    await makeEntry(show.id, judge2.id, { categoryId: pieced.id, categoryState: "decided" });
+    await makeEntry(show.id, judge2.id, { categoryId: pieced.id, categoryState: "decided", paidAt: new Date() });
     const [own] = (await openOf()).filter((c) => c.judgeUserId === judge2.id);
     await expect(resolveConflict(await viewerOf(chair), show.slug, { judgeUserId: judge2.id, entryId: own!.entryId, action: "move", reason: "" })).rejects.toMatchObject({ status: 409, message: "Judge Rowan is the only judge on Panel A; add another judge to that panel first (Panels), or allow the conflict with a reason." });
   });
 
   it("only the chair decides conflicts", async () => {
-    const entry = await makeEntry(show.id, judge.id, { categoryId: pieced.id, categoryState: "decided" });
+    const entry = await makeEntry(show.id, judge.id, { categoryId: pieced.id, categoryState: "decided", paidAt: new Date() });
     await expect(resolveConflict(await viewerOf(judge), show.slug, { judgeUserId: judge.id, entryId: entry.id, action: "allow", reason: "mine is fine" })).rejects.toMatchObject({ status: 403 });
   });
 });
@@ -121,8 +121,8 @@ describe("a category move", () => {
 describe("the sync route", () => {
   it("refuses a conflicted judge's marks on that entry with 403 naming it, applies nothing, and takes them once the chair allows", async () => {
     await db.update(shows).set({ status: "judging" }).where(eq(shows.id, show.id));
-    const own = await makeEntry(show.id, judge.id, { categoryId: pieced.id, categoryState: "decided", status: "received" });
-    const other = await makeEntry(show.id, ada.id, { categoryId: pieced.id, categoryState: "decided", status: "received" });
+    const own = await makeEntry(show.id, judge.id, { categoryId: pieced.id, categoryState: "decided", paidAt: new Date(), status: "received" });
+    const other = await makeEntry(show.id, ada.id, { categoryId: pieced.id, categoryState: "decided", paidAt: new Date(), status: "received" });
     const change = (entryId: string, seq: number) => ({ kind: "set", key: `k-${randomUUID()}`, entryId, seq, field: "discuss", value: true, baseVersion: 0 });
     const post = async (changes: unknown[]) => {
       const res = await syncRoute(new Request(`http://t/api/shows/${show.slug}/judging/sync`, { method: "POST", headers: { cookie: judge.cookie, "content-type": "application/json" }, body: JSON.stringify({ deviceId: "tab-juniper-0001", forJudge: judge.id, changes }) }), { params: Promise.resolve({ slug: show.slug }) });

@@ -45,7 +45,7 @@ beforeAll(async () => {
   }
   // A draft still says which category it would fall in; it is nobody's business but the owner's and the chair's.
   const draft = await makeEntry(show.id, owner.id, { status: "draft", entryNumber: null, categoryId: mine.id });
-  const sent = await makeEntry(show.id, owner.id, { status: "received", categoryId: mine.id, categoryState: "decided" });
+  const sent = await makeEntry(show.id, owner.id, { status: "received", categoryId: mine.id, categoryState: "decided", paidAt: new Date() });
   photo.draft = await photoOf(draft.id);
   photo.submitted = await photoOf(sent.id);
 });

@@ -47,8 +47,8 @@ beforeAll(async () => {
   pieced = await makeCategory(show.id, { code: "10", name: "Pieced" });
   applique = await makeCategory(show.id, { code: "20", name: "Appliqué" });
   // Judge Alder has a quilt in Appliqué; Entrant Briar one in Pieced.
-  await makeEntry(show.id, judge2.id, { categoryId: applique.id, categoryState: "decided", status: "received" });
-  await makeEntry(show.id, entrant.id, { categoryId: pieced.id, categoryState: "decided", status: "received", madeBy: ["Entrant Briar"] });
+  await makeEntry(show.id, judge2.id, { categoryId: applique.id, categoryState: "decided", paidAt: new Date(), status: "received" });
+  await makeEntry(show.id, entrant.id, { categoryId: pieced.id, categoryState: "decided", paidAt: new Date(), status: "received", madeBy: ["Entrant Briar"] });
 });
 
 const asChair = () => actAs(chair.cookie);
@@ -100,7 +100,7 @@ describe("categories", () => {
     expect(r).toMatchObject({ ok: false, status: 400, fieldErrors: { scoreSheetId: ["That score sheet isn't in this show."] } });
 
     const started = await makeCategory(show.id, { code: "30", name: "Started" });
-    const entry = await makeEntry(show.id, entrant.id, { categoryId: started.id, categoryState: "decided", status: "received" });
+    const entry = await makeEntry(show.id, entrant.id, { categoryId: started.id, categoryState: "decided", paidAt: new Date(), status: "received" });
     await db.insert(judgeSheets).values({ showId: show.id, entryId: entry.id, judgeUserId: judge.id, state: { status: "open", version: 0, fields: {}, conflicts: [] } });
     const late = await setCategoryJudgingAction(null, { showSlug: show.slug, categoryId: started.id, method: "rank", scoreSheetId: null });
     expect(late).toMatchObject({ ok: false, status: 409, message: "Judges have started on 30 Started; its method and sheet can't change now." });
@@ -161,7 +161,7 @@ describe("options and reopening", () => {
 
   it("needs a reason, and refuses to reopen a sheet that is still open (409)", async () => {
     asChair();
-    const entry = await makeEntry(show.id, entrant.id, { categoryId: pieced.id, categoryState: "decided", status: "received" });
+    const entry = await makeEntry(show.id, entrant.id, { categoryId: pieced.id, categoryState: "decided", paidAt: new Date(), status: "received" });
     const [sheet] = await db.insert(judgeSheets).values({ showId: show.id, entryId: entry.id, judgeUserId: judge.id, state: { status: "open", version: 0, fields: {}, conflicts: [] } }).returning();
     expect(await reopenSheetAction(null, { showSlug: show.slug, sheetId: sheet!.id, reason: "" })).toMatchObject({ ok: false, status: 400, fieldErrors: { reason: ["Say why, in a few words (it goes in the audit log)."] } });
     expect(await reopenSheetAction(null, { showSlug: show.slug, sheetId: sheet!.id, reason: "Judge asked" })).toMatchObject({ ok: false, status: 409, message: "That sheet is still open; there is nothing to reopen." });

@@ -25,7 +25,7 @@ async function judgedShow(scores: [number, number | null][]) {
   await db.insert(panelCategories).values({ panelId: panel!.id, categoryId: cat.id });
   const entries = [];
   for (const [x, y] of scores) {
-    const e = await makeEntry(show.id, entrant.id, { categoryId: cat.id, categoryState: "decided", quiltingMethod: "hand" });
+    const e = await makeEntry(show.id, entrant.id, { categoryId: cat.id, categoryState: "decided", paidAt: new Date(), quiltingMethod: "hand" });
     entries.push(e);
     const put = (judge: string, total: number) => db.insert(judgeSheets).values({ showId: show.id, entryId: e.id, judgeUserId: judge, status: "submitted", state: { ...emptySheet(), status: "submitted" }, total: { total, complete: true, percent: total } });
     await put(a.id, x);

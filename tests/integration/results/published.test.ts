@@ -57,7 +57,7 @@ async function judgedShow() {
   const scales = [1, 0.9, 0.6];
   const entries = [];
   for (const [i, owner] of owners.entries()) {
-    const e = await makeEntry(show.id, owner.id, { categoryId: cat.id, categoryState: "decided", title: `Tide pool ${i + 1}` });
+    const e = await makeEntry(show.id, owner.id, { categoryId: cat.id, categoryState: "decided", paidAt: new Date(), title: `Tide pool ${i + 1}` });
     entries.push(e);
     for (const [j, judge] of [a, b].entries()) {
       const marks = marksFor(scales[i]!);

@@ -23,7 +23,7 @@ describe("the published two-judge averages", () => {
     const pairs: [number, number, number][] = [[94, 96, 95], [88, 93, 90.5], [79, 85, 82]];
     const ids: string[] = [];
     for (const [x, y] of pairs) {
-      const e = await makeEntry(show.id, entrant.id, { categoryId: cat.id, categoryState: "decided" });
+      const e = await makeEntry(show.id, entrant.id, { categoryId: cat.id, categoryState: "decided", paidAt: new Date() });
       ids.push(e.id);
       await sheet(show.id, e.id, a.id, x);
       await sheet(show.id, e.id, b.id, y);
@@ -45,7 +45,7 @@ describe("SQL, JavaScript and simple-statistics agree", () => {
     const samples = fc.sample(fc.array(fc.integer({ min: 4_000, max: 10_000 }), { minLength: 3, maxLength: 3 }), { numRuns: 24, seed: 1224 });
     const cats = [await makeCategory(show.id, { code: "A" }), await makeCategory(show.id, { code: "B" })];
     for (let i = 0; i < samples.length; i++) {
-      const e = await makeEntry(show.id, entrant.id, { categoryId: cats[i % 2]!.id, categoryState: "decided" });
+      const e = await makeEntry(show.id, entrant.id, { categoryId: cats[i % 2]!.id, categoryState: "decided", paidAt: new Date() });
       const list = samples[i]!.map((h, j) => ({ judge: judges[j]!.id, total: h / 100 }));
       // One entry is missing its third sheet: statistics over the two there are.
       const used = i === 5 ? list.slice(0, 2) : list;
@@ -108,7 +108,7 @@ describe("proposed results", () => {
     await db.insert(panelCategories).values({ panelId: panel!.id, categoryId: cat.id });
     const scores: [number, number | null][] = [[90, 92], [91, 91], [80, 84], [70, null]];
     for (const [x, y] of scores) {
-      const e = await makeEntry(show.id, entrant.id, { categoryId: cat.id, categoryState: "decided" });
+      const e = await makeEntry(show.id, entrant.id, { categoryId: cat.id, categoryState: "decided", paidAt: new Date() });
       await sheet(show.id, e.id, a.id, x);
       if (y !== null) await sheet(show.id, e.id, b.id, y);
     }

@@ -19,7 +19,7 @@ import { updateDatesAction, updateSettingsAction, publishRulesAction, changeStat
 import { GET as getSettingsRoute } from "@/app/api/shows/[slug]/settings/route";
 import { getViewer, type Viewer } from "@/lib/session";
 import { actAs } from "../../helpers/request-context";
-import { grantRole, makeCategory, makeShow, makeUser, type TestUser } from "../../helpers/factories";
+import { grantRole, makeCategory, makeEntry, makeShow, makeUser, type TestUser } from "../../helpers/factories";
 
 type Show = Awaited<ReturnType<typeof makeShow>>;
 let show: Show;
@@ -251,22 +251,24 @@ describe("show status", () => {
     expect(await changeStatusAction(null, { showSlug: show.slug, status: "judging" })).toMatchObject({
       ok: false,
       status: 409,
-      message: "A show being set up can't move to “judging”; it can move to “taking entries”.",
+      message: "A show at “Being set up” can't move to “Judging”; it can move to “Taking entries”.",
     });
     expect(await changeStatusAction(null, { showSlug: show.slug, status: "entries_open" })).toMatchObject({ ok: true, message: "The show is now taking entries." });
-    expect(await changeStatusAction(null, { showSlug: show.slug, status: "entries_open" })).toMatchObject({ ok: false, status: 409, message: "The show is already taking entries." });
+    expect(await changeStatusAction(null, { showSlug: show.slug, status: "entries_open" })).toMatchObject({ ok: false, status: 409, message: "The show is already at “Taking entries”." });
     const v = await viewerOf(chair);
-    await changeShowStatus(v, show.slug, { status: "entries_closed" });
+    // Closing before the closing date is a warning: the move needs a reason.
+    await changeShowStatus(v, show.slug, { status: "entries_closed", reason: "Closing early in this test." });
     // Judging waits for categories (tests/integration/categories covers the queue).
-    await expect(changeShowStatus(v, show.slug, { status: "judging" })).rejects.toMatchObject({ status: 409, message: "Set up the categories first (Categories)." });
-    await makeCategory(show.id);
-    await changeShowStatus(v, show.slug, { status: "judging" });
+    await expect(changeShowStatus(v, show.slug, { status: "judging" })).rejects.toMatchObject({ status: 409, message: expect.stringContaining("Set up the categories first (Categories).") });
+    const category = await makeCategory(show.id);
+    await makeEntry(show.id, chair.id, { status: "paid", categoryId: category.id, categoryState: "decided" });
+    await changeShowStatus(v, show.slug, { status: "judging", reason: "No panel yet in this test." });
     await expect(changeShowStatus(v, show.slug, { status: "entries_open" })).rejects.toMatchObject({ status: 409 });
     const audits = await auditFor(show.id, "show.status_changed");
     expect(audits.map((a) => [a.before, a.after])).toEqual([
       [{ status: "draft" }, { status: "entries_open" }],
-      [{ status: "entries_open" }, { status: "entries_closed" }],
-      [{ status: "entries_closed" }, { status: "judging" }],
+      [{ status: "entries_open" }, expect.objectContaining({ status: "entries_closed", reason: "Closing early in this test." })],
+      [{ status: "entries_closed" }, expect.objectContaining({ status: "judging", reason: "No panel yet in this test." })],
     ]);
   });
 

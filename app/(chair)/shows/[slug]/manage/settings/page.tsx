@@ -19,6 +19,7 @@ import { Alert } from "@/components/ui/alert";
 import { Card, CardHeader } from "@/components/ui/card";
 import { PageHeader } from "@/components/ui/page-header";
 import { settingsForChair } from "@/db/queries/settings";
+import { stageMovePreview } from "@/db/queries/stage-counts";
 
 type Props = { params: Promise<{ slug: string }> };
 
@@ -37,7 +38,9 @@ const SECTIONS = [
 export default async function ShowSettingsPage({ params }: Props) {
   const { slug } = await params;
   const viewer = await pageViewer();
-  const { show, settings, rulesHistory, allowedMoves } = await guardQuery(settingsForChair(viewer, slug));
+  const { show, settings, rulesHistory, nextStage, stepBack } = await guardQuery(settingsForChair(viewer, slug));
+  // What each move would do, for the confirm step; the server checks again when the chair confirms.
+  const [next, back] = await Promise.all([nextStage ? stageMovePreview(viewer, slug, nextStage) : null, stepBack ? stageMovePreview(viewer, slug, stepBack) : null]);
   const current = settings.currentRules;
   const readyToOpen = [
     { done: Boolean(show.entryClosesAt && show.entryClosesAt > new Date()), label: "A date entries close, still ahead (Dates)" },
@@ -75,7 +78,7 @@ export default async function ShowSettingsPage({ params }: Props) {
               ))}
             </ul>
           ) : null}
-          <StatusForm showSlug={show.slug} status={show.status} moves={allowedMoves} />
+          <StatusForm showSlug={show.slug} status={show.status} next={next} back={back} />
         </div>
       </Card>
 
