@@ -266,7 +266,7 @@ describe("show status", () => {
     await expect(changeShowStatus(v, show.slug, { status: "entries_open" })).rejects.toMatchObject({ status: 409 });
     const audits = await auditFor(show.id, "show.status_changed");
     expect(audits.map((a) => [a.before, a.after])).toEqual([
-      [{ status: "draft" }, { status: "entries_open" }],
+      [{ status: "draft" }, { status: "entries_open", stepBack: false }],
       [{ status: "entries_open" }, expect.objectContaining({ status: "entries_closed", reason: "Closing early in this test." })],
       [{ status: "entries_closed" }, expect.objectContaining({ status: "judging", reason: "No panel yet in this test." })],
     ]);
