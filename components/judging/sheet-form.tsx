@@ -2,6 +2,7 @@
 // One judge's sheet for one entry: the sorting pass and rank where the category's method has
 // them, the criteria by section, comments per section and overall (unless the show takes none),
 // "discuss for award", conflicts and refusals. Every tap goes straight to the tablet's outbox.
+import { useState } from "react";
 import { Flag, Split, TriangleAlert, X } from "lucide-react";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
@@ -34,6 +35,8 @@ function valueText(v: Json): string {
 
 export function SheetForm({ sheet, method, view, commentPolicy, quickPhrases, onChange, onDismiss }: Props) {
   const { values, locked } = view;
+  // Quick phrases show under the comment box last focused, not under every box.
+  const [activeComment, setActiveComment] = useState<string | null>(null);
   const set = (field: string, value: Json) => onChange({ kind: "set", field, value });
   const hasSort = method === "sort_then_points" || method === "sort_then_rank";
   const hasRank = method === "rank" || method === "sort_then_rank";
@@ -100,7 +103,7 @@ export function SheetForm({ sheet, method, view, commentPolicy, quickPhrases, on
               ))}
               {comments ? (
                 <div className="border-t border-line pt-4">
-                  <CommentBox label={`Comment on ${s.title.toLowerCase()}`} value={typeof values[`comment:${s.id}`] === "string" ? (values[`comment:${s.id}`] as string) : ""} phrases={quickPhrases} disabled={locked} hint={commentHint} onText={(t) => set(`comment:${s.id}`, t)} />
+                  <CommentBox label={`Comment on ${s.title.toLowerCase()}`} value={typeof values[`comment:${s.id}`] === "string" ? (values[`comment:${s.id}`] as string) : ""} phrases={quickPhrases} disabled={locked} hint={commentHint} onText={(t) => set(`comment:${s.id}`, t)} active={activeComment === `comment:${s.id}`} onActivate={() => setActiveComment(`comment:${s.id}`)} />
                 </div>
               ) : null}
             </section>
@@ -108,7 +111,7 @@ export function SheetForm({ sheet, method, view, commentPolicy, quickPhrases, on
         : null}
 
       <section aria-label="Overall" className="space-y-4 rounded-card border border-line bg-surface p-4 shadow-card">
-        {comments ? <CommentBox label="Overall comment" value={typeof values["comment:overall"] === "string" ? (values["comment:overall"] as string) : ""} phrases={quickPhrases} disabled={locked} hint={commentHint} onText={(t) => set("comment:overall", t)} /> : null}
+        {comments ? <CommentBox label="Overall comment" value={typeof values["comment:overall"] === "string" ? (values["comment:overall"] as string) : ""} phrases={quickPhrases} disabled={locked} hint={commentHint} onText={(t) => set("comment:overall", t)} active={activeComment === "comment:overall"} onActivate={() => setActiveComment("comment:overall")} /> : null}
         <button type="button" disabled={locked} aria-pressed={values.discuss === true} onClick={() => set("discuss", values.discuss !== true)} className={cx(bigTarget, "w-full gap-3 text-xl", values.discuss === true ? "border-gold-600 bg-gold-100 text-gold-800" : chosen(false))}>
           <Flag aria-hidden className="size-6" />
           {values.discuss === true ? "Marked to discuss for award" : "Discuss for award"}

@@ -20,6 +20,7 @@ export async function scoreAndSubmit(page: Page, entryNumber: number, impact: nu
   }
   await page.getByRole("group", { name: /^Appliqué/ }).getByRole("button", { name: /^N\/A/ }).click();
   await page.getByRole("group", { name: /^Edges and binding/ }).getByRole("button", { name: "Good", exact: true }).click();
+  await page.getByRole("textbox", { name: "Overall comment" }).click(); // phrases show under the box in use
   await page.getByRole("list", { name: "Quick phrases for overall comment" }).getByRole("button", { name: "+ Points meet crisply." }).click();
   await expect(page.getByRole("textbox", { name: "Overall comment" })).toHaveValue("Points meet crisply.");
   await page.getByRole("button", { name: "Submit sheet" }).click();
