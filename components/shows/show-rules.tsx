@@ -8,8 +8,9 @@ export function ShowRules({ rules, timeZone }: { rules: Rules; timeZone: string 
   if (!rules) return <p className="text-ink-muted italic">The committee hasn’t published the rules yet.</p>;
   return (
     <div className="space-y-4">
-      <p className="flex items-center gap-2 text-sm text-ink-muted">
-        <ScrollText aria-hidden className="size-4" />
+      {/* Plain text with the icon inline, so the line wraps as words on a phone (a flex row would squeeze each piece into its own column). */}
+      <p className="text-sm text-ink-muted">
+        <ScrollText aria-hidden className="mr-2 inline size-4 align-[-0.125em]" />
         Version {rules.version}, published <time dateTime={isoDateTime(rules.publishedAt)}>{formatDate(rules.publishedAt, timeZone)}</time>. You accept
         this version when you enter.
       </p>

@@ -2,13 +2,14 @@
 import Link from "next/link";
 import { CircleCheck, Circle } from "lucide-react";
 import { cx } from "@/components/ui/cx";
+import { ScrollToCurrent } from "./scroll-nav";
 import type { EntryStep, Gap } from "@/scoring/entry-completeness";
 
 export const STEP_LABELS: Record<EntryStep, string> = { quilt: "Quilt", makers: "Makers", about: "About", photos: "Photos", review: "Review" };
 
 export function StepNav({ entryId, current, gaps, steps }: { entryId: string; current: EntryStep; gaps: Gap[]; steps: readonly EntryStep[] }) {
   return (
-    <nav aria-label="Entry steps" className="-mx-1 overflow-x-auto">
+    <ScrollToCurrent label="Entry steps" className="relative -mx-1 overflow-x-auto">
       <ol className="flex min-w-max gap-1 px-1">
         {steps.map((s, i) => {
           const done = s !== "review" && !gaps.some((g) => g.step === s);
@@ -33,6 +34,6 @@ export function StepNav({ entryId, current, gaps, steps }: { entryId: string; cu
           );
         })}
       </ol>
-    </nav>
+    </ScrollToCurrent>
   );
 }
