@@ -4,6 +4,7 @@
 import { z } from "zod";
 import { storableString } from "@/lib/validation";
 import type { Condition } from "@/scoring/categories";
+import { parseLength } from "@/scoring/measure";
 
 const MEASURES = ["width", "length", "perimeter", "area", "longestSide", "shortestSide"] as const;
 const OPS = ["<", "<=", ">", ">="] as const;
@@ -125,12 +126,24 @@ export const overrideSchema = z.object({
   reason: storableString().trim().min(3, "Say why, in a few words (it goes in the audit log).").max(300, "Keep the reason to 300 characters."),
 });
 
-export const measureSchema = z.object({
+export const measureFields = z.object({
   entryId: uuid,
   width: storableString().trim().min(1, "Enter the measured width.").max(20),
   length: storableString().trim().min(1, "Enter the measured length.").max(20),
   unit: z.enum(["in", "cm"]),
 });
+
+/** Text that is not a length ("abc") gets the parser's own message beside its field, on the
+ * tablet before sending and in the action alike. */
+export function checkMeasuredLengths(v: { width: string; length: string; unit: "in" | "cm" }, ctx: z.RefinementCtx) {
+  for (const field of ["width", "length"] as const) {
+    if (!v[field]) continue;
+    const parsed = parseLength(v[field], v.unit);
+    if (!parsed.ok) ctx.addIssue({ code: "custom", path: [field], message: parsed.message });
+  }
+}
+
+export const measureSchema = measureFields.superRefine(checkMeasuredLengths);
 
 export const reviewSizeSchema = z.object({ entryId: uuid });
 

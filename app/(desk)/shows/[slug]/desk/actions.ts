@@ -5,9 +5,9 @@ import { z } from "zod";
 import { storableString } from "@/lib/validation";
 import { recordMeasurement } from "@/db/queries/category-queue";
 import { defineAction } from "@/lib/action";
-import { measureSchema } from "@/lib/schemas/categories";
+import { checkMeasuredLengths, measureFields } from "@/lib/schemas/categories";
 
-const measureActionSchema = measureSchema.extend({ slug: storableString().trim().min(1).max(120) });
+const measureActionSchema = measureFields.extend({ slug: storableString().trim().min(1).max(120) }).superRefine(checkMeasuredLengths);
 
 export const measureEntryAction = defineAction(measureActionSchema, async ({ slug, ...input }, viewer) => {
   const result = await recordMeasurement(viewer, slug, input);
