@@ -6,8 +6,8 @@ import { createColumnHelper, columnVisibilityFeature, rowSelectionFeature, rowSo
 import { EntryStatusBadge } from "@/components/entries/entry-status";
 import { DIVISION_LABELS, labelOf } from "@/components/entries/labels";
 import { Badge } from "@/components/ui/badge";
-import { formatDateTime } from "@/components/format/dates";
-import { formatSize } from "@/scoring/units";
+import { formatDate, formatTime } from "@/components/format/dates";
+import { UM_PER_CM, formatCm, formatInches } from "@/scoring/units";
 import { categoryText } from "@/lib/category-text";
 import type { ChairEntry } from "./types";
 
@@ -31,7 +31,10 @@ export const COLUMN_LABELS: Record<string, string> = {
   status: "Status",
 };
 
-/** Shown until the chair chooses otherwise; the e-mail and value columns start hidden. */
+/**
+ * Shown until the chair chooses otherwise; the e-mail, value and judged columns start hidden (the
+ * division cell says "Display only" under it), so the table fits a 1280 px laptop.
+ */
 export const DEFAULT_VISIBILITY: Record<string, boolean> = {
   number: true,
   title: true,
@@ -40,7 +43,7 @@ export const DEFAULT_VISIBILITY: Record<string, boolean> = {
   category: true,
   size: true,
   division: true,
-  judged: true,
+  judged: false,
   payment: true,
   value: false,
   submitted: true,
@@ -77,9 +80,27 @@ export function entryColumns(showSlug: string, timeZone: string, currency: strin
     helper.accessor((e) => e.widthUm * e.lengthUm, {
       id: "size",
       header: COLUMN_LABELS.size,
-      cell: (c) => <span className="whitespace-nowrap">{formatSize(c.row.original.widthUm, c.row.original.lengthUm)}</span>,
+      // Inches on one line, centimeters below: the column stays narrow enough for a laptop.
+      cell: (c) => (
+        <span className="block whitespace-nowrap">
+          {formatInches(c.row.original.widthUm, false)} × {formatInches(c.row.original.lengthUm)}
+          <span className="block text-sm text-ink-muted">
+            {(c.row.original.widthUm / UM_PER_CM).toFixed(1)} × {formatCm(c.row.original.lengthUm)}
+          </span>
+        </span>
+      ),
     }),
-    helper.accessor("division", { id: "division", header: COLUMN_LABELS.division, enableSorting: false, cell: (c) => labelOf(DIVISION_LABELS, c.getValue()) }),
+    helper.accessor("division", {
+      id: "division",
+      header: COLUMN_LABELS.division,
+      enableSorting: false,
+      cell: (c) => (
+        <span className="block">
+          {labelOf(DIVISION_LABELS, c.getValue())}
+          {c.row.original.judged ? null : <span className="block text-sm text-ink-muted">Display only</span>}
+        </span>
+      ),
+    }),
     helper.accessor("judged", { id: "judged", header: COLUMN_LABELS.judged, enableSorting: false, cell: (c) => (c.getValue() ? "Judged" : "Display only") }),
     helper.accessor("paymentState", {
       id: "payment",
@@ -90,7 +111,19 @@ export function entryColumns(showSlug: string, timeZone: string, currency: strin
       ),
     }),
     helper.accessor("declaredValueCents", { id: "value", header: COLUMN_LABELS.value, enableSorting: false, cell: (c) => <span className="tabular-nums">{money.format(c.getValue() / 100)}</span> }),
-    helper.accessor("submittedAt", { id: "submitted", header: COLUMN_LABELS.submitted, cell: (c) => formatDateTime(c.getValue(), timeZone) ?? "—" }),
+    helper.accessor("submittedAt", {
+      id: "submitted",
+      header: COLUMN_LABELS.submitted,
+      cell: (c) =>
+        c.getValue() ? (
+          <span className="block">
+            {formatDate(c.getValue(), timeZone)}
+            <span className="block text-sm text-ink-muted">{formatTime(c.getValue(), timeZone)}</span>
+          </span>
+        ) : (
+          "—"
+        ),
+    }),
     helper.accessor("status", {
       id: "status",
       header: COLUMN_LABELS.status,

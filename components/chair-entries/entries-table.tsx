@@ -68,7 +68,7 @@ export function EntriesTable({ showSlug, initial }: Props) {
 
   return (
     <div className="space-y-5">
-      <div className="grid gap-4 sm:grid-cols-2 lg:grid-cols-4 xl:grid-cols-7">
+      <div className="grid gap-4 sm:grid-cols-2 lg:grid-cols-4">
         <TextField
           className="sm:col-span-2"
           label="Search"
@@ -159,7 +159,8 @@ export function EntriesTable({ showSlug, initial }: Props) {
           Try fewer filters, or search by the entry number.
         </EmptyState>
       ) : (
-        <Table caption={`Entries at ${page.show.name}, sorted by ${COLUMN_LABELS[query.sort]}`}>
+        // Tighter cell padding than the house table: eleven columns fit from 1280 px without scrolling sideways.
+        <Table className="[&_th]:px-2.5 sm:[&_td]:px-2.5" caption={`Entries at ${page.show.name}, sorted by ${COLUMN_LABELS[query.sort]}`}>
           <THead>
             {table.getHeaderGroups().map((group) => (
               <tr key={group.id}>
