@@ -154,7 +154,7 @@ export default async function ChairEntryPage({ params }: Props) {
 
       <Card aria-labelledby="history">
         <CardHeader id="history" title="History" description={`Times in ${show.timeZone}.`} />
-        <EntryHistory items={d.history} timeZone={show.timeZone} />
+        <EntryHistory items={d.history} timeZone={show.timeZone} currency={show.currency} />
       </Card>
     </div>
   );
