@@ -154,7 +154,7 @@ function SheetHistory({ showSlug, sheetId, timeZone }: { showSlug: string; sheet
               <tr key={i} className="border-t border-line">
                 <td className="px-3 py-2 whitespace-nowrap">{formatTime(r.at, timeZone)}</td>
                 <td className="px-3 py-2">{r.text}</td>
-                <td className="px-3 py-2">{r.kind === "submit" ? "Submitted" : (r.field ?? "—").replace(/^mark:/, "Mark: ").replace(/^comment:/, "Comment: ")}</td>
+                <td className="px-3 py-2">{r.fieldName}</td>
                 <td className="px-3 py-2 break-words">{r.kind === "submit" ? "—" : describe(r.value)}</td>
                 <td className="px-3 py-2">
                   {OUTCOME[outcome.kind] ?? outcome.kind}

@@ -14,6 +14,7 @@ import { AppError, conflict, forbiddenError } from "@/lib/errors";
 import type { SyncBatch } from "@/lib/schemas/judging";
 import { AREA_ROLES, requireShowRole, type Viewer } from "@/lib/session";
 import { sheetTotal, validateMark, type Criterion, type Mark, type ScoreSheet } from "@/scoring/score-sheets";
+import { sheetFieldName } from "@/scoring/sheet-field-names";
 import { applyBatch, emptySheet, marksOfState, type ChangeOutcome, type Json, type SheetChange, type SheetState } from "@/scoring/sheet-sync";
 
 /**
@@ -262,7 +263,18 @@ export async function sheetHistory(viewer: Viewer, slug: string, sheetRowId: str
     .where(and(eq(scoreChanges.sheetId, sheetRowId), eq(scoreChanges.showId, showId)))
     .orderBy(asc(scoreChanges.id));
   const judgeIds = [...new Set(rows.map((r) => r.forJudge))];
-  const names = judgeIds.length ? await db.select({ id: user.id, name: user.name }).from(user).where(inArray(user.id, judgeIds)) : [];
+  const [names, sheets, [own]] = await Promise.all([
+    judgeIds.length ? db.select({ id: user.id, name: user.name }).from(user).where(inArray(user.id, judgeIds)) : [],
+    sheetsOfShow(db, showId),
+    db.select({ scoreSheetId: judgeSheets.scoreSheetId }).from(judgeSheets).where(and(eq(judgeSheets.id, sheetRowId), eq(judgeSheets.showId, showId))),
+  ]);
   const nameOf = new Map(names.map((n) => [n.id, n.name]));
-  return rows.map((r) => ({ ...r, forJudgeName: nameOf.get(r.forJudge) ?? "?", text: r.enteredBy === r.forJudge ? `${r.enteredByName}` : `${r.enteredByName} for ${nameOf.get(r.forJudge) ?? "?"}` }));
+  // Criteria and sections by their names on the sheet the judge used (the show's default if none is recorded).
+  const sheet = sheets.byId.get(own?.scoreSheetId ?? sheets.defaultId ?? "")?.sheet ?? null;
+  return rows.map((r) => ({
+    ...r,
+    fieldName: r.kind === "submit" ? "Submitted" : sheetFieldName(r.field, sheet as ScoreSheet | null),
+    forJudgeName: nameOf.get(r.forJudge) ?? "?",
+    text: r.enteredBy === r.forJudge ? `${r.enteredByName}` : `${r.enteredByName} for ${nameOf.get(r.forJudge) ?? "?"}`,
+  }));
 }

@@ -198,6 +198,8 @@ describe("syncing sheet changes", () => {
 
     const history = await sheetHistory(await viewerOf(chair), show.slug, row.id);
     expect(history[0]).toMatchObject({ enteredByName: "Scribe Sorrel", forJudgeName: "Judge Juniper", text: "Scribe Sorrel for Judge Juniper" });
+    // Criteria and comments by their names on the sheet, never their keys.
+    expect(history.map((h) => h.fieldName).slice(0, 6)).toEqual(["Mark for Visual impact", "Mark for Design", "Mark for Colour", "Mark for Piecing", "Overall comment", "Submitted"]);
 
     await reopenJudgeSheet(await viewerOf(chair), show.slug, { sheetId: row.id, reason: "judge asked to revisit" });
     expect((await sheetRow(e))!.status).toBe("open");
