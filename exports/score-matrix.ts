@@ -9,7 +9,7 @@ import type { PgDatabase } from "drizzle-orm/pg-core";
 import type { PostgresJsQueryResultHKT } from "drizzle-orm/postgres-js";
 import type * as schema from "../db/schema";
 import { categories, entries, judgeSheets, scoreSheets, user } from "../db/schema";
-import { markPoints, type Mark, type ScoreSheet } from "../scoring/score-sheets";
+import { formatScore, markPoints, type Mark, type ScoreSheet } from "../scoring/score-sheets";
 import type { SheetState } from "../scoring/sheet-sync";
 
 export type MatrixDb = PgDatabase<PostgresJsQueryResultHKT, typeof schema>;
@@ -95,7 +95,7 @@ export async function writeScoreMatrix(rows: AsyncIterable<MatrixRow>, sheets: {
   for await (const r of rows) {
     const target = r.sheetId ? byId.get(r.sheetId) : undefined;
     if (!target) continue;
-    const cells: Record<string, ExcelJS.CellValue> = { entry: r.entryNumber, category: r.categoryCode, judge: r.judgeName, total: r.total, status: r.status === "submitted" ? "submitted" : "open" };
+    const cells: Record<string, ExcelJS.CellValue> = { entry: r.entryNumber, category: r.categoryCode, judge: r.judgeName, total: r.total === null ? null : Number(formatScore(r.total)), status: r.status === "submitted" ? "submitted" : "open" };
     for (const c of target.criteria) {
       const mark = r.state.fields[`mark:${c.id}`]?.value as Mark | null | undefined;
       cells[`c_${c.id}`] = mark?.kind === "na" ? "N/A" : mark ? markPoints(c, mark) : null;

@@ -43,7 +43,7 @@ describe("score matrix", () => {
     const e2 = await makeEntry(show.id, entrant.id, { categoryId: cat.id, categoryState: "decided", paidAt: new Date() });
     await db.insert(judgeSheets).values([
       { showId: show.id, entryId: e1.id, judgeUserId: j1.id, scoreSheetId: sheetId, status: "submitted", state: stateWith({ impact: 36, design: 27, piecing: 25 }), total: { total: 88 } },
-      { showId: show.id, entryId: e1.id, judgeUserId: j2.id, scoreSheetId: sheetId, status: "submitted", state: stateWith({ impact: 38, design: 28, piecing: "na" }), total: { total: 94.29 } },
+      { showId: show.id, entryId: e1.id, judgeUserId: j2.id, scoreSheetId: sheetId, status: "submitted", state: stateWith({ impact: 38, design: 28, piecing: "na" }), total: { total: 66 / 0.7 } },
       { showId: show.id, entryId: e2.id, judgeUserId: j1.id, scoreSheetId: sheetId, status: "open", state: { ...stateWith({ impact: 30 }), status: "open" }, total: { total: null } },
     ]);
     const other = await makeShow();
@@ -60,6 +60,7 @@ describe("score matrix", () => {
     const data = XLSX.utils.sheet_to_json<Record<string, unknown>>(ws);
     expect(data).toHaveLength(3);
     expect(data[0]).toMatchObject({ Entry: e1.entryNumber, Category: "10", "Visual impact (of 40)": 36, "Design (of 30)": 27, "Piecing (of 30)": 25, Total: 88, Sheet: "submitted" });
+    // Stored unrounded (66 of 70 rescaled to 100 = 94.2857…); written as the screen shows it.
     expect(data.find((r) => r.Judge === "Judge Two")).toMatchObject({ "Piecing (of 30)": "N/A", Total: 94.29 });
     expect(data[2]).toMatchObject({ Entry: e2.entryNumber, "Visual impact (of 40)": 30, Sheet: "open" });
     expect(data[2]!["Design (of 30)"]).toBeUndefined();
