@@ -50,7 +50,8 @@ export const actions: Record<string, Case> = {
       const category = await makeCategory(show.id);
       // A paid entry with a category: someone to judge, so nothing refuses the move.
       await makeEntry(show.id, w.users.entrant.id, { status: "paid", paidAt: new Date(), categoryId: category.id, categoryState: "decided" });
-      return { showSlug: show.slug, status: "judging", reason: "" };
+      // No panel judges the new category yet: a warning, so the move carries the chair's reason.
+      return { showSlug: show.slug, status: "judging", reason: "Panels are set on the morning of judging." };
     },
   },
 };
