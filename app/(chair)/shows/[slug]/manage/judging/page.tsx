@@ -6,6 +6,7 @@ import Link from "next/link";
 import { Activity, ArrowLeft } from "lucide-react";
 import { CategoryMethods } from "@/components/judging-setup/category-methods";
 import { ConflictsSection } from "@/components/judging-setup/conflicts-section";
+import { UnclearedSection } from "@/components/judging-setup/uncleared-section";
 import { DeclarationsSection } from "@/components/judging-setup/declarations-section";
 import { JudgingOptionsForm } from "@/components/judging-setup/options-form";
 import { PanelsSection } from "@/components/judging-setup/panels-section";
@@ -15,6 +16,7 @@ import { Alert } from "@/components/ui/alert";
 import { ButtonLink } from "@/components/ui/button";
 import { Card, CardHeader } from "@/components/ui/card";
 import { PageHeader } from "@/components/ui/page-header";
+import { unclearedForChair } from "@/db/queries/judged-entries";
 import { judgingSetup } from "@/db/queries/judging-setup";
 
 type Props = { params: Promise<{ slug: string }> };
@@ -27,13 +29,14 @@ const SECTIONS = [
   ["panels", "Panels"],
   ["declarations", "Declarations"],
   ["conflicts", "Conflicts"],
+  ["uncleared", "Not paid"],
   ["judging-options", "Options"],
 ] as const;
 
 export default async function JudgingSetupPage({ params }: Props) {
   const { slug } = await params;
   const viewer = await pageViewer();
-  const setup = await guardQuery(judgingSetup(viewer, slug));
+  const [setup, uncleared] = await guardQuery(Promise.all([judgingSetup(viewer, slug), unclearedForChair(viewer, slug)]));
   const assigned = new Set(setup.panels.flatMap((p) => p.categoryIds));
   // Display-only categories are never judged, so they need no panel.
   const unassigned = setup.categories.filter((c) => !c.displayOnly && !assigned.has(c.id));
@@ -86,6 +89,11 @@ export default async function JudgingSetupPage({ params }: Props) {
       <Card aria-labelledby="conflicts">
         <CardHeader id="conflicts" title="Conflicts" description="A judge’s own entry, or a declared person’s, in a category they judge. Found whenever a declaration, an entry or a category changes; judges are never told. Judging can’t start while one is open." />
         <ConflictsSection showSlug={slug} open={setup.conflicts.open} decided={setup.conflicts.decided} />
+      </Card>
+
+      <Card aria-labelledby="uncleared">
+        <CardHeader id="uncleared" title="Not paid" description="Entries sent for judging that are not paid yet (at a juried show, not accepted). They stay off the judges’ lists unless you record why one is judged anyway." />
+        <UnclearedSection showSlug={slug} entries={uncleared} />
       </Card>
 
       <Card aria-labelledby="judging-options">
