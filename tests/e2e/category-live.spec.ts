@@ -96,7 +96,9 @@ test("the intake volunteer measures a quilt 2 in off and sees it flagged", async
   await form.getByLabel("Width (in)").fill("4 ft");
   await form.getByLabel("Length (in)").fill("60");
   await form.getByRole("button", { name: "Save measurement" }).click();
-  await expect(form.getByText("Give the whole length in inches, e.g. 60 rather than 5 ft.")).toBeVisible({ timeout: 30_000 });
+  // The reason stands beside the field and in the form's summary of why it was not saved.
+  await expect(form.getByText("Give the whole length in inches, e.g. 60 rather than 5 ft.")).toHaveCount(2, { timeout: 30_000 });
+  await expect(form.getByText("Give the whole length in inches, e.g. 60 rather than 5 ft.").first()).toBeVisible();
   await expect(form.getByLabel("Width (in)")).toHaveValue("4 ft");
   await expect(form.getByLabel("Length (in)")).toHaveValue("60");
 
