@@ -80,3 +80,20 @@ test("the chair closes entries with a reason after seeing what is open, then ste
     ["entries_open", "Closed by mistake; the date was right.", true],
   ]);
 });
+
+test("the chair has an unpaid entry judged anyway, with a reason, from Judging set-up", async ({ page }) => {
+  test.setTimeout(120_000);
+  await page.setViewportSize(VIEWPORTS.desktop);
+  await signIn(page, "chair@ribbonry.test");
+  await page.goto(`/shows/${slug}/manage/judging#uncleared`);
+  const list = page.getByRole("list", { name: "Entries not cleared for judging" });
+  const row = list.getByRole("listitem").filter({ hasText: "Entry 102" });
+  await expect(row).toContainText("not on the judges’ lists");
+  await expect(list.getByRole("listitem").filter({ hasText: "Entry 101" })).toHaveCount(0); // paid: cleared
+  await row.getByRole("button", { name: "Judge it anyway" }).click();
+  await expect(row.getByText("Reason: say why this entry is judged although it is not paid.")).toBeVisible();
+  await row.getByLabel("Reason to judge it anyway").fill("Paid in cash at the guild meeting.");
+  await row.getByRole("button", { name: "Judge it anyway" }).click();
+  await expect(row).toContainText("judged anyway: Paid in cash at the guild meeting.", { timeout: 30_000 });
+  await shootAllWidths(page, "judging-setup-not-paid");
+});
