@@ -44,7 +44,7 @@ test("the chair changes a placement with a reason and publishes; the public page
   const form = page.getByRole("form", { name: "Change the placement of entry 104" });
   await form.getByLabel("New placement").selectOption("hm");
   await form.getByRole("button", { name: "Save the change" }).click();
-  await expect(form.getByText(/Give a reason/)).toBeVisible();
+  await expect(form.getByText(/Give a reason/).first()).toBeVisible(); // beside the field and in the form's summary
   await form.getByLabel("Reason").fill(REASON);
   await form.getByRole("button", { name: "Save the change" }).click();
   await expect(entry(104)).toContainText("Changed by the chair");
