@@ -1,7 +1,7 @@
 // Icons for navigation links, chosen by name because the server sends the links as plain data.
 import {
   ClipboardCheck,
-  Gavel,
+  ClipboardPen,
   Inbox,
   LogIn,
   Settings2,
@@ -18,7 +18,7 @@ const ICONS: Record<NavIconName, LucideIcon> = {
   account: UserRound,
   admin: Shield,
   manage: Settings2,
-  judging: Gavel,
+  judging: ClipboardPen,
   desk: ClipboardCheck,
   show: Store,
   signIn: LogIn,

@@ -1,5 +1,5 @@
 // The stages of a show and their dates, in the show's time zone.
-import { CalendarDays, ClipboardCheck, Gavel, PackageOpen, PenLine, Store } from "lucide-react";
+import { CalendarDays, ClipboardCheck, ClipboardPen, PackageOpen, PenLine, Store } from "lucide-react";
 import { formatDateRange, type DateInput } from "@/components/format/dates";
 
 export type ShowDates = {
@@ -21,7 +21,7 @@ export function stagesOf(show: ShowDates) {
   return [
     { key: "entries", label: "Entries", icon: PenLine, when: formatDateRange(show.entryOpensAt, show.entryClosesAt, tz, { withTime: true }) },
     { key: "dropoff", label: "Drop-off", icon: ClipboardCheck, when: formatDateRange(show.dropOffStartsAt, show.dropOffEndsAt, tz, { withTime: true }) },
-    { key: "judging", label: "Judging", icon: Gavel, when: formatDateRange(show.judgingStartsAt, show.judgingEndsAt, tz) },
+    { key: "judging", label: "Judging", icon: ClipboardPen, when: formatDateRange(show.judgingStartsAt, show.judgingEndsAt, tz) },
     { key: "show", label: "Show days", icon: Store, when: formatDateRange(show.showOpensAt, show.showClosesAt, tz) },
     { key: "pickup", label: "Pick-up", icon: PackageOpen, when: formatDateRange(show.pickUpStartsAt, show.pickUpEndsAt, tz, { withTime: true }) },
   ];

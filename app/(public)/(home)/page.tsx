@@ -1,6 +1,6 @@
 // Home: what Ribbonry does for each person at a show, and the shows open to the public.
 import type { Metadata } from "next";
-import { CalendarX2, ClipboardCheck, Gavel, Settings2, Trophy, Scissors } from "lucide-react";
+import { CalendarX2, ClipboardCheck, ClipboardPen, Settings2, Trophy, Scissors } from "lucide-react";
 import { RibbonMark } from "@/components/brand/ribbon-mark";
 import { ShowCard } from "@/components/shows/show-card";
 import { EmptyState } from "@/components/ui/empty-state";
@@ -17,7 +17,7 @@ const ROLES = [
   { icon: Settings2, who: "Show committees", what: "Open a show, set the dates and categories, and invite judges, scribes and intake volunteers." },
   { icon: Scissors, who: "Quilters", what: "Enter quilts online, pay the entry fee and follow each quilt from drop-off to pick-up." },
   { icon: ClipboardCheck, who: "Intake desk", what: "Find an entry by number or name and check quilts in and out with a clear record." },
-  { icon: Gavel, who: "Judges and scribes", what: "Score quilts blind on a tablet, by entry number — no maker names on any screen." },
+  { icon: ClipboardPen, who: "Judges and scribes", what: "Score quilts blind on a tablet, by entry number — no maker names on any screen." },
   { icon: Trophy, who: "The chair", what: "Review the scores, settle the ribbons and Best of Show, and publish the results." },
 ];
 

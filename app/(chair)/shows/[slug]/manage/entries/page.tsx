@@ -1,6 +1,6 @@
 // The chair's entries: every entry sent to the show, searched, filtered and acted on in bulk.
 import type { Metadata } from "next";
-import { Gavel } from "lucide-react";
+import { ScanSearch } from "lucide-react";
 import { EntriesTable } from "@/components/chair-entries/entries-table";
 import { guardQuery, pageViewer } from "@/components/shell/guard";
 import { Alert } from "@/components/ui/alert";
@@ -25,7 +25,7 @@ export default async function ChairEntriesPage({ params }: Props) {
         description={`${page.total} ${page.total === 1 ? "entry has" : "entries have"} been sent to the show.`}
         actions={
           page.show.juried ? (
-            <ButtonLink href={`/shows/${page.show.slug}/manage/jurying`} variant="secondary" icon={<Gavel aria-hidden className="size-5" />}>
+            <ButtonLink href={`/shows/${page.show.slug}/manage/jurying`} variant="secondary" icon={<ScanSearch aria-hidden className="size-5" />}>
               Jurying
             </ButtonLink>
           ) : null
