@@ -5,7 +5,7 @@ import fc from "fast-check";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { env } from "@/lib/env";
 import type { Case, Role, World } from "../authz/table";
-import { allowedRole, cookieOf, corrupt, discoverRoutes, fcParams, hostile, inputFrom, jsonText, loadRows, makeWorld, OUTSIDERS, RUNS, SEED, type RouteFn } from "./harness";
+import { allowedRole, cookieOf, discoverRoutes, fcParams, hostile, inputFrom, jsonText, loadRows, makeWorld, OUTSIDERS, RUNS, SEED, type RouteFn } from "./harness";
 
 const { routes: ROWS, delegated: DELEGATED } = await loadRows();
 let world: World;

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { checkStageMove, needsReason, NEXT_STAGE, STAGES, STEP_BACK, type Stage, type StageCounts } from "@/scoring/stage-moves";
+import { checkStageMove, needsReason, NEXT_STAGE, STAGES, STEP_BACK, type StageCounts } from "@/scoring/stage-moves";
 import { isJudgedEntry } from "@/scoring/judged-entries";
 
 const now = new Date("2027-03-01T12:00:00Z");

@@ -1,7 +1,6 @@
 "use server";
 // The intake desk's actions: recording the size a quilt measures at drop-off.
 import { revalidatePath } from "next/cache";
-import { z } from "zod";
 import { storableString } from "@/lib/validation";
 import { recordMeasurement } from "@/db/queries/category-queue";
 import { defineAction } from "@/lib/action";
